@@ -1,0 +1,4 @@
+// Every table, for the drizzle client's relational queries. drizzle-kit reads db/tables/*.ts.
+export * from "@/db/tables/tenancy";
+export * from "@/db/tables/workspace";
+export * from "@/db/tables/duty-cycles";

@@ -1,0 +1,63 @@
+import { sql } from "drizzle-orm";
+import { index, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+
+/** Roles inside one dealership. A user may hold a different role in each dealership. */
+export const membershipRole = pgEnum("membership_role", [
+  "dealer_admin",
+  "estimator",
+  "billing_admin",
+  "customer",
+]);
+
+export const unitSystem = pgEnum("unit_system", ["metric", "imperial"]);
+
+export const dealerships = pgTable("dealerships", {
+  id: uuid().primaryKey().defaultRandom(),
+  name: text().notNull(),
+  slug: text().notNull().unique(),
+  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});
+
+/** Column names follow what @auth/drizzle-adapter expects of a users table. */
+export const users = pgTable("users", {
+  id: text()
+    .primaryKey()
+    .$defaultFn(() => crypto.randomUUID()),
+  name: text(),
+  email: text().notNull().unique(),
+  emailVerified: timestamp({ mode: "date", withTimezone: true }),
+  image: text(),
+  passwordHash: text(),
+  unitSystem: unitSystem().notNull().default("metric"),
+  activeDealershipId: uuid().references(() => dealerships.id, { onDelete: "set null" }),
+  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+});
+
+export const memberships = pgTable(
+  "memberships",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    dealershipId: uuid()
+      .notNull()
+      .references(() => dealerships.id, { onDelete: "cascade" }),
+    userId: text()
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: membershipRole().notNull(),
+    /** Set only for role "customer": the one customer record this account may see. */
+    customerId: uuid(),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex("memberships_dealership_user_role").on(t.dealershipId, t.userId, t.role),
+    index("memberships_user").on(t.userId),
+    index("memberships_customer")
+      .on(t.customerId)
+      .where(sql`${t.customerId} is not null`),
+  ],
+);
+
+export type TDealership = typeof dealerships.$inferSelect;
+export type TUser = typeof users.$inferSelect;
+export type TMembership = typeof memberships.$inferSelect;
+export type TMembershipRole = (typeof membershipRole.enumValues)[number];

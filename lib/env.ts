@@ -1,0 +1,44 @@
+import { z } from "zod";
+
+/**
+ * The one place that reads process.env. Local defaults make `npm start` and `npm test`
+ * work with no hand-written env file; production overrides them.
+ */
+const ZEnv = z.object({
+  NODE_ENV: z.enum(["development", "test", "production"]).default("development"),
+  DATABASE_URL: z
+    .string()
+    .url("DATABASE_URL must be a postgres:// URL")
+    .default("postgres://postgres@127.0.0.1:54329/treadcast"),
+  APP_URL: z.string().url().default("http://localhost:3000"),
+  AUTH_SECRET: z.string().min(16).default("treadcast-local-development-secret-change-me"),
+  SMTP_HOST: z.string().default("127.0.0.1"),
+  SMTP_PORT: z.coerce.number().int().positive().default(2525),
+  MAIL_FROM: z.string().default("Treadcast <no-reply@treadcast.test>"),
+  MAILBOX_ENABLED: z
+    .enum(["true", "false"])
+    .default("false")
+    .transform((v) => v === "true"),
+  UPLOAD_DIR: z.string().default("var/uploads"),
+  UPLOAD_LIMIT_BYTES: z.coerce
+    .number()
+    .int()
+    .positive()
+    .default(200 * 1024 * 1024),
+  APP_VERSION: z.string().default(process.env.npm_package_version ?? "0.1.0"),
+});
+
+export type TEnv = z.infer<typeof ZEnv>;
+
+let cached: TEnv | undefined;
+
+export function getEnv(): TEnv {
+  if (cached) return cached;
+  const parsed = ZEnv.safeParse(process.env);
+  if (!parsed.success) {
+    const detail = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
+    throw new Error(`Invalid environment: ${detail}`);
+  }
+  cached = parsed.data;
+  return cached;
+}

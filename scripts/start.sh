@@ -1,0 +1,79 @@
+#!/usr/bin/env bash
+# npm start: everything needed to serve Treadcast on http://localhost:3000 from a fresh clone.
+source "$(dirname "$0")/lib/common.sh"
+
+APP_PORT="${PORT:-3000}"
+PGPORT="${PGPORT:-54329}"
+DB_NAME="treadcast"
+export SMTP_PORT="${SMTP_PORT:-2525}"
+export STRIPE_FAKE_PORT="${STRIPE_FAKE_PORT:-12111}"
+
+port_busy "$APP_PORT" && fail "port $APP_PORT is already in use (is Treadcast already running?). Stop that process or run PORT=3001 npm start."
+port_busy "$SMTP_PORT" && fail "port $SMTP_PORT (mail fake) is already in use. Stop that process or set SMTP_PORT."
+
+ensure_node_modules
+ensure_postgres
+
+PIDS=()
+STARTED_PG=0
+cleanup() {
+  trap - INT TERM EXIT
+  log "stopping"
+  for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done
+  for pid in "${PIDS[@]}"; do wait "$pid" 2>/dev/null || true; done
+  [ "$STARTED_PG" = 1 ] && pg_down .pgdata
+  log "stopped"
+}
+trap cleanup INT TERM EXIT
+
+"$PGBIN/pg_isready" -q -h 127.0.0.1 -p "$PGPORT" || STARTED_PG=1
+pg_up .pgdata "$PGPORT" "$DB_NAME" PGPORT
+
+export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/$DB_NAME"
+export APP_URL="http://localhost:$APP_PORT"
+export AUTH_URL="$APP_URL"
+export MAILBOX_ENABLED="${MAILBOX_ENABLED:-true}"
+export NEXT_TELEMETRY_DISABLED=1
+
+log "migrating database"
+node_modules/.bin/tsx scripts/migrate.ts
+log "seeding demo data"
+node_modules/.bin/tsx scripts/seed.ts
+
+# Rebuild only when a source file is newer than the last build.
+if [ ! -f .next/BUILD_ID ] || [ -n "$(find app features lib db components public mocks next.config.mjs tailwind.config.ts package-lock.json -newer .next/BUILD_ID -type f -print -quit 2>/dev/null)" ]; then
+  log "building the production app (next build)"
+  node_modules/.bin/next build >/tmp/treadcast-build.log 2>&1 || { tail -40 /tmp/treadcast-build.log; fail "next build failed"; }
+fi
+
+log "starting local fakes (mail, payments)"
+node_modules/.bin/tsx mocks/run-fakes.ts &
+PIDS+=($!)
+
+if [ -f scripts/worker.ts ]; then
+  log "starting background worker"
+  node_modules/.bin/tsx scripts/worker.ts &
+  PIDS+=($!)
+fi
+
+log "starting the app"
+node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$APP_PORT" &
+PIDS+=($!)
+
+for _ in $(seq 1 100); do port_busy "$APP_PORT" && break; sleep 0.2; done
+
+cat <<MSG
+
+  Treadcast is running at  http://localhost:$APP_PORT
+  (use localhost, not 127.0.0.1: sign-in cookies are bound to it)
+
+  Demo sign-ins:
+$(node_modules/.bin/tsx scripts/print-demo-accounts.ts 2>/dev/null || echo "    see README")
+
+  Mailbox of the mail fake:  http://localhost:$APP_PORT/dev/mailbox
+  Press Ctrl-C to stop everything.
+
+MSG
+
+# Stop everything when any supervised process exits.
+wait -n "${PIDS[@]}" || true

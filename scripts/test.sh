@@ -1,0 +1,40 @@
+#!/usr/bin/env bash
+# npm test: every tier against a separate test cluster, so it can run beside `npm start`.
+source "$(dirname "$0")/lib/common.sh"
+
+PGPORT="${TEST_PGPORT:-54339}"
+DB_NAME="treadcast_test"
+export NODE_ENV=test
+export NEXT_TELEMETRY_DISABLED=1
+export E2E_PORT="${E2E_PORT:-3100}"
+export SMTP_PORT="${TEST_SMTP_PORT:-2526}"
+export STRIPE_FAKE_PORT="${TEST_STRIPE_FAKE_PORT:-12112}"
+export NEXT_DIST_DIR=".next-test"
+
+ensure_node_modules
+ensure_postgres
+ensure_chromium
+
+STARTED_PG=0
+cleanup() {
+  trap - INT TERM EXIT
+  [ "$STARTED_PG" = 1 ] && pg_down .pgdata-test
+}
+trap cleanup INT TERM EXIT
+"$PGBIN/pg_isready" -q -h 127.0.0.1 -p "$PGPORT" || STARTED_PG=1
+pg_up .pgdata-test "$PGPORT" "$DB_NAME" TEST_PGPORT
+export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/$DB_NAME"
+export APP_URL="http://localhost:$E2E_PORT"
+export AUTH_URL="$APP_URL"
+
+step() { local name="$1"; shift; log "── $name"; local t0=$SECONDS; "$@"; log "   $name passed in $((SECONDS - t0)) s"; }
+
+step "typecheck" node_modules/.bin/tsc --noEmit
+step "lint" node_modules/.bin/eslint --max-warnings=0 .
+step "format" node_modules/.bin/prettier --check . --log-level warn
+step "migrate" node_modules/.bin/tsx scripts/migrate.ts
+step "unit tests" node_modules/.bin/vitest run --project unit
+step "integration tests" node_modules/.bin/vitest run --project integration
+step "production build" env MAILBOX_ENABLED=true node_modules/.bin/next build
+step "end-to-end tests" node_modules/.bin/vitest run --project e2e
+log "all tiers passed"
