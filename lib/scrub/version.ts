@@ -1,0 +1,2 @@
+/** Engine version stored with every estimate; bump when results change (golden files change). */
+export const ENGINE_VERSION = "1.0.0";
