@@ -74,6 +74,7 @@ CREATE TABLE "customers" (
 	"contact_name" text,
 	"contact_email" text,
 	"contact_phone" text,
+	"contacts" jsonb DEFAULT '[]'::jsonb NOT NULL,
 	"notes" text DEFAULT '' NOT NULL,
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
@@ -84,14 +85,20 @@ CREATE TABLE "estimates" (
 	"dealership_id" uuid NOT NULL,
 	"customer_id" uuid,
 	"machine_id" uuid NOT NULL,
-	"duty_cycle_id" uuid NOT NULL,
+	"duty_cycle_id" uuid,
+	"duty_cycle_version" integer DEFAULT 1 NOT NULL,
+	"site_id" uuid,
 	"title" text NOT NULL,
+	"machine_name" text DEFAULT '' NOT NULL,
+	"duty_cycle_name" text DEFAULT '' NOT NULL,
 	"machine_version" integer NOT NULL,
 	"engine_version" text NOT NULL,
 	"inputs" jsonb NOT NULL,
 	"result" jsonb NOT NULL,
 	"cost_per_hour" double precision,
 	"hours_to_first_replacement" double precision,
+	"first_to_wear" text,
+	"warning_count" integer DEFAULT 0 NOT NULL,
 	"created_by_id" text,
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL
 );
@@ -102,7 +109,9 @@ CREATE TABLE "machines" (
 	"customer_id" uuid,
 	"name" text NOT NULL,
 	"kind" text NOT NULL,
+	"layout" text DEFAULT 'ideal' NOT NULL,
 	"spec" jsonb NOT NULL,
+	"template_id" uuid,
 	"version" integer DEFAULT 1 NOT NULL,
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
@@ -115,7 +124,8 @@ CREATE TABLE "sites" (
 	"name" text NOT NULL,
 	"surface_mix" jsonb NOT NULL,
 	"notes" text DEFAULT '' NOT NULL,
-	"created_at" timestamp with time zone DEFAULT now() NOT NULL
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
+	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
 );
 --> statement-breakpoint
 ALTER TABLE "duty_cycle_turns" ADD CONSTRAINT "duty_cycle_turns_duty_cycle_id_duty_cycles_id_fk" FOREIGN KEY ("duty_cycle_id") REFERENCES "public"."duty_cycles"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
@@ -130,9 +140,11 @@ ALTER TABLE "customers" ADD CONSTRAINT "customers_dealership_id_dealerships_id_f
 ALTER TABLE "estimates" ADD CONSTRAINT "estimates_dealership_id_dealerships_id_fk" FOREIGN KEY ("dealership_id") REFERENCES "public"."dealerships"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "estimates" ADD CONSTRAINT "estimates_customer_id_customers_id_fk" FOREIGN KEY ("customer_id") REFERENCES "public"."customers"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "estimates" ADD CONSTRAINT "estimates_machine_id_machines_id_fk" FOREIGN KEY ("machine_id") REFERENCES "public"."machines"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "estimates" ADD CONSTRAINT "estimates_site_id_sites_id_fk" FOREIGN KEY ("site_id") REFERENCES "public"."sites"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "estimates" ADD CONSTRAINT "estimates_created_by_id_users_id_fk" FOREIGN KEY ("created_by_id") REFERENCES "public"."users"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "machines" ADD CONSTRAINT "machines_dealership_id_dealerships_id_fk" FOREIGN KEY ("dealership_id") REFERENCES "public"."dealerships"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "machines" ADD CONSTRAINT "machines_customer_id_customers_id_fk" FOREIGN KEY ("customer_id") REFERENCES "public"."customers"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "machines" ADD CONSTRAINT "machines_template_id_machines_id_fk" FOREIGN KEY ("template_id") REFERENCES "public"."machines"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "sites" ADD CONSTRAINT "sites_dealership_id_dealerships_id_fk" FOREIGN KEY ("dealership_id") REFERENCES "public"."dealerships"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "sites" ADD CONSTRAINT "sites_customer_id_customers_id_fk" FOREIGN KEY ("customer_id") REFERENCES "public"."customers"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX "duty_cycle_turns_cycle_seq" ON "duty_cycle_turns" USING btree ("duty_cycle_id","seq");--> statement-breakpoint
@@ -142,9 +154,13 @@ CREATE UNIQUE INDEX "memberships_dealership_user_role" ON "memberships" USING bt
 CREATE INDEX "memberships_user" ON "memberships" USING btree ("user_id");--> statement-breakpoint
 CREATE INDEX "memberships_customer" ON "memberships" USING btree ("customer_id") WHERE "memberships"."customer_id" is not null;--> statement-breakpoint
 CREATE INDEX "customers_dealership_name" ON "customers" USING btree ("dealership_id","name");--> statement-breakpoint
+CREATE INDEX "customers_dealership_updated" ON "customers" USING btree ("dealership_id","updated_at");--> statement-breakpoint
 CREATE INDEX "estimates_dealership_created" ON "estimates" USING btree ("dealership_id","created_at");--> statement-breakpoint
+CREATE INDEX "estimates_customer_created" ON "estimates" USING btree ("customer_id","created_at");--> statement-breakpoint
 CREATE INDEX "estimates_machine" ON "estimates" USING btree ("machine_id");--> statement-breakpoint
 CREATE INDEX "estimates_duty_cycle" ON "estimates" USING btree ("duty_cycle_id");--> statement-breakpoint
 CREATE INDEX "machines_dealership_name" ON "machines" USING btree ("dealership_id","name");--> statement-breakpoint
+CREATE INDEX "machines_dealership_updated" ON "machines" USING btree ("dealership_id","updated_at");--> statement-breakpoint
 CREATE INDEX "machines_customer" ON "machines" USING btree ("customer_id");--> statement-breakpoint
-CREATE INDEX "sites_customer" ON "sites" USING btree ("customer_id");
+CREATE INDEX "sites_customer" ON "sites" USING btree ("customer_id");--> statement-breakpoint
+CREATE INDEX "sites_dealership_name" ON "sites" USING btree ("dealership_id","name");

@@ -7,8 +7,17 @@ import {
   uuid,
   integer,
   doublePrecision,
+  type AnyPgColumn,
 } from "drizzle-orm/pg-core";
 import { dealerships, users } from "./tenancy";
+
+/** A person to talk to at a customer (buyer, workshop foreman, operator). */
+export type TCustomerContact = {
+  name: string;
+  role?: string;
+  email?: string;
+  phone?: string;
+};
 
 /** A dealership's customer: farm, contractor, council, estate... */
 export const customers = pgTable(
@@ -23,11 +32,16 @@ export const customers = pgTable(
     contactName: text(),
     contactEmail: text(),
     contactPhone: text(),
+    /** Further contacts beyond the main one. */
+    contacts: jsonb().$type<TCustomerContact[]>().notNull().default([]),
     notes: text().notNull().default(""),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("customers_dealership_name").on(t.dealershipId, t.name)],
+  (t) => [
+    index("customers_dealership_name").on(t.dealershipId, t.name),
+    index("customers_dealership_updated").on(t.dealershipId, t.updatedAt),
+  ],
 );
 
 /** A place a customer works, with its surface mix as shares that add up to 1. */
@@ -45,8 +59,12 @@ export const sites = pgTable(
     surfaceMix: jsonb().$type<Record<string, number>>().notNull(),
     notes: text().notNull().default(""),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("sites_customer").on(t.customerId)],
+  (t) => [
+    index("sites_customer").on(t.customerId),
+    index("sites_dealership_name").on(t.dealershipId, t.name),
+  ],
 );
 
 /**
@@ -63,13 +81,18 @@ export const machines = pgTable(
     customerId: uuid().references(() => customers.id, { onDelete: "cascade" }),
     name: text().notNull(),
     kind: text().notNull(),
+    /** Steering layout of the default mode, copied out of spec for filtering. */
+    layout: text().notNull().default("ideal"),
     spec: jsonb().notNull(),
+    /** The template this machine was copied from, if any. */
+    templateId: uuid().references((): AnyPgColumn => machines.id, { onDelete: "set null" }),
     version: integer().notNull().default(1),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
     index("machines_dealership_name").on(t.dealershipId, t.name),
+    index("machines_dealership_updated").on(t.dealershipId, t.updatedAt),
     index("machines_customer").on(t.customerId),
   ],
 );
@@ -86,19 +109,28 @@ export const estimates = pgTable(
     machineId: uuid()
       .notNull()
       .references(() => machines.id, { onDelete: "cascade" }),
-    dutyCycleId: uuid().notNull(),
+    /** The duty cycle used; its turns are frozen in `inputs`, so the estimate outlives it. */
+    dutyCycleId: uuid(),
+    dutyCycleVersion: integer().notNull().default(1),
+    /** Site whose surface mix filled in turns without a surface, if one was chosen. */
+    siteId: uuid().references(() => sites.id, { onDelete: "set null" }),
     title: text().notNull(),
+    machineName: text().notNull().default(""),
+    dutyCycleName: text().notNull().default(""),
     machineVersion: integer().notNull(),
     engineVersion: text().notNull(),
     inputs: jsonb().notNull(),
     result: jsonb().notNull(),
     costPerHour: doublePrecision(),
     hoursToFirstReplacement: doublePrecision(),
+    firstToWear: text(),
+    warningCount: integer().notNull().default(0),
     createdById: text().references(() => users.id, { onDelete: "set null" }),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
     index("estimates_dealership_created").on(t.dealershipId, t.createdAt),
+    index("estimates_customer_created").on(t.customerId, t.createdAt),
     index("estimates_machine").on(t.machineId),
     index("estimates_duty_cycle").on(t.dutyCycleId),
   ],
