@@ -2,3 +2,4 @@
 export * from "@/db/tables/tenancy";
 export * from "@/db/tables/workspace";
 export * from "@/db/tables/duty-cycles";
+export * from "@/db/tables/accounts";

@@ -1,5 +1,14 @@
 import { sql } from "drizzle-orm";
-import { index, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import {
+  check,
+  index,
+  pgEnum,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
 
 /** Roles inside one dealership. A user may hold a different role in each dealership. */
 export const membershipRole = pgEnum("membership_role", [
@@ -30,6 +39,8 @@ export const users = pgTable("users", {
   passwordHash: text(),
   unitSystem: unitSystem().notNull().default("metric"),
   activeDealershipId: uuid().references(() => dealerships.id, { onDelete: "set null" }),
+  /** Session tokens issued before this moment are refused (set by a password reset). */
+  sessionsValidFrom: timestamp({ withTimezone: true }),
   createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
 });
 
@@ -54,6 +65,11 @@ export const memberships = pgTable(
     index("memberships_customer")
       .on(t.customerId)
       .where(sql`${t.customerId} is not null`),
+    // A customer account without its customer record would see nothing or, worse, everything.
+    check(
+      "memberships_customer_has_record",
+      sql`(${t.role} = 'customer') = (${t.customerId} is not null)`,
+    ),
   ],
 );
 
