@@ -5,4 +5,4 @@
 export { ENGINE_VERSION } from "./version";
 export * from "./schemas";
 export { estimate } from "./estimate";
-// Turn segmentation (added by its owner): export { segmentTurns } from "./segment-turns";
+export * from "./segment-turns";
