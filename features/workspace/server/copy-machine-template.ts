@@ -1,0 +1,41 @@
+import "server-only";
+import type { DbOrTx } from "@/db/client";
+import type { TActor } from "@/lib/authz/actor";
+import type { TMachineInput } from "@/lib/scrub";
+import { ZCopyTemplateInput, type TMachineDto } from "@/features/workspace/schemas/machine";
+import { parseOrThrow, WorkspaceError } from "@/features/workspace/server/errors";
+import { loadMachine } from "@/features/workspace/server/get-machine";
+import { createMachine } from "@/features/workspace/server/create-machine";
+
+/** Copies a dealership template (or any machine) to a customer, remembering where it came from. */
+export async function copyMachineTemplate({
+  db,
+  actor,
+  id,
+  input,
+}: {
+  db: DbOrTx;
+  actor: TActor;
+  id: string;
+  input: unknown;
+}): Promise<TMachineDto> {
+  const { machine } = await loadMachine(db, actor, id, "read");
+  const values = parseOrThrow(ZCopyTemplateInput, input);
+  const spec = machine.spec as TMachineInput;
+  if (!spec || typeof spec !== "object")
+    throw new WorkspaceError(
+      422,
+      "invalid_template",
+      "This machine has no usable specification to copy.",
+    );
+  return createMachine({
+    db,
+    actor,
+    input: {
+      customerId: values.customerId,
+      kind: machine.kind,
+      spec: { ...spec, name: values.name ?? spec.name },
+    },
+    templateId: machine.id,
+  });
+}

@@ -1,0 +1,27 @@
+import "server-only";
+import type { DbOrTx } from "@/db/client";
+import { sites } from "@/db/schema";
+import type { TActor } from "@/lib/authz/actor";
+import { ZSiteInput, type TSiteDto } from "@/features/workspace/schemas/site";
+import { parseOrThrow } from "@/features/workspace/server/errors";
+import { resolveCustomerField } from "@/features/workspace/server/resolve-customer";
+import { toSiteDto } from "@/features/workspace/server/site-dto";
+
+export async function createSite({
+  db,
+  actor,
+  input,
+}: {
+  db: DbOrTx;
+  actor: TActor;
+  input: unknown;
+}): Promise<TSiteDto> {
+  const values = parseOrThrow(ZSiteInput, input);
+  const customer = await resolveCustomerField(db, actor, values.customerId);
+  const [row] = await db
+    .insert(sites)
+    .values({ ...values, dealershipId: actor.dealershipId })
+    .returning();
+  if (!row) throw new Error("insert returned no site");
+  return toSiteDto(row, customer.name);
+}

@@ -1,0 +1,61 @@
+import "server-only";
+import { and, asc, desc, eq, ilike, sql, type SQL } from "drizzle-orm";
+import type { DbOrTx } from "@/db/client";
+import { customers, machines, sites } from "@/db/schema";
+import type { TActor } from "@/lib/authz/actor";
+import type { TCustomerListQuery, TPage } from "@/features/workspace/schemas/list-query";
+import type { TCustomerRow } from "@/features/workspace/schemas/customer";
+import { customerScope } from "@/features/workspace/server/authorize";
+import { likePattern, toPage, iso } from "@/features/workspace/server/paging";
+
+const sortColumns = {
+  name: customers.name,
+  kind: customers.kind,
+  updatedAt: customers.updatedAt,
+  createdAt: customers.createdAt,
+} as const;
+
+export async function listCustomers({
+  db,
+  actor,
+  query,
+}: {
+  db: DbOrTx;
+  actor: TActor;
+  query: TCustomerListQuery;
+}): Promise<TPage<TCustomerRow>> {
+  const filters: SQL[] = [eq(customers.dealershipId, actor.dealershipId)];
+  const scope = customerScope(actor);
+  if (scope) filters.push(eq(customers.id, scope));
+  if (query.q) filters.push(ilike(customers.name, likePattern(query.q)));
+  const where = and(...filters);
+  const order = query.dir === "desc" ? desc : asc;
+
+  const [rows, [count]] = await Promise.all([
+    db
+      .select({
+        id: customers.id,
+        name: customers.name,
+        kind: customers.kind,
+        contactName: customers.contactName,
+        updatedAt: customers.updatedAt,
+        machineCount: sql<number>`(select count(*)::int from ${machines} where ${machines.customerId} = ${customers.id})`,
+        siteCount: sql<number>`(select count(*)::int from ${sites} where ${sites.customerId} = ${customers.id})`,
+      })
+      .from(customers)
+      .where(where)
+      .orderBy(order(sortColumns[query.sort]), asc(customers.id))
+      .limit(query.pageSize)
+      .offset((query.page - 1) * query.pageSize),
+    db
+      .select({ n: sql<number>`count(*)::int` })
+      .from(customers)
+      .where(where),
+  ]);
+  return toPage(
+    rows.map((r) => ({ ...r, updatedAt: iso(r.updatedAt) })),
+    count?.n ?? 0,
+    query.page,
+    query.pageSize,
+  );
+}

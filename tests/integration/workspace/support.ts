@@ -1,0 +1,64 @@
+import { getDb } from "@/db/client";
+import type { TMachineInput } from "@/lib/scrub";
+import { createTestMember, requestAs } from "@/tests/support/session";
+
+export const db = getDb();
+export const BASE = "http://localhost:3000";
+
+type THandler = (
+  req: Request,
+  ctx: { params: Promise<Record<string, string>> },
+) => Promise<Response>;
+
+/** Calls a route handler the way Next does: a real Request and the route's params. */
+export async function call(
+  handler: THandler,
+  cookie: string | null,
+  path: string,
+  init: { method?: string; body?: unknown; params?: Record<string, string> } = {},
+) {
+  const res = await handler(requestAs(cookie, `${BASE}/${path.replace(/^\//, "")}`, init), {
+    params: Promise.resolve(init.params ?? {}),
+  });
+  const text = await res.text();
+  let body: any = text; // eslint-disable-line @typescript-eslint/no-explicit-any
+  try {
+    body = JSON.parse(text);
+  } catch {
+    // CSV and other text bodies stay as text
+  }
+  return { status: res.status, body, headers: res.headers };
+}
+
+/** A dealership with a dealer admin, an estimator, a billing admin and (later) customers. */
+export async function makeDealership() {
+  const admin = await createTestMember({ db, roles: ["dealer_admin"] });
+  const dealershipId = admin.dealership.id;
+  const estimator = await createTestMember({ db, roles: ["estimator"], dealershipId });
+  const billing = await createTestMember({ db, roles: ["billing_admin"], dealershipId });
+  return { admin, estimator, billing, dealershipId };
+}
+
+/** An invented front-wheel-assist tractor with a trapezoid linkage (test data, not a real model). */
+export function testTractorSpec(overrides: Partial<TMachineInput> = {}): TMachineInput {
+  return {
+    name: "Test row-crop tractor",
+    wheelbase: 2.8,
+    axles: {
+      front: {
+        track: 1.9,
+        pivotTrack: 1.7,
+        load: 3000,
+        tyre: { designation: "480/70R28", treadDepthNew: 40, treadDepthReplace: 10, price: 1500 },
+      },
+      rear: {
+        track: 1.9,
+        load: 4500,
+        tyre: { designation: "580/70R38", treadDepthNew: 50, treadDepthReplace: 12, price: 2400 },
+      },
+    },
+    steering: { layout: "trapezoid", maxLock: 55, armLength: 0.2, armAngle: 17, tieRod: "behind" },
+    drive: { type: "front-assist", gearRatio: 1.32 },
+    ...overrides,
+  };
+}
