@@ -15,6 +15,17 @@ const ZEnv = z.object({
   SMTP_HOST: z.string().default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().positive().default(2525),
   MAIL_FROM: z.string().default("Treadcast <no-reply@treadcast.test>"),
+  /** Credentials for a real SMTP provider; the local mail fake needs none. */
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  /** "true" for implicit TLS (usually port 465); STARTTLS is used when the server offers it. */
+  SMTP_SECURE: z
+    .enum(["true", "false"])
+    .default("false")
+    .transform((v) => v === "true"),
+  /** Sign-in and magic-link attempts allowed per address, and per client IP, per 15 minutes. */
+  AUTH_LIMIT_PER_ADDRESS: z.coerce.number().int().positive().default(10),
+  AUTH_LIMIT_PER_IP: z.coerce.number().int().positive().default(200),
   MAILBOX_ENABLED: z
     .enum(["true", "false"])
     .default("false")
