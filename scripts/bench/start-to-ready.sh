@@ -1,0 +1,20 @@
+#!/usr/bin/env bash
+# Prints the warm start-to-ready time of `npm start` (dependencies installed, app already built):
+# from launch until /api/health answers 200 on the app port. Stops everything afterwards.
+set -euo pipefail
+cd "$(dirname "$0")/../.."
+PORT="${PORT:-3000}"
+log=$(mktemp)
+t0=$(date +%s.%N)
+setsid bash scripts/start.sh >"$log" 2>&1 &
+pid=$!
+ready=""
+for _ in $(seq 1 600); do
+  if curl -fs -o /dev/null "http://localhost:$PORT/api/health"; then ready=1; break; fi
+  sleep 0.1
+done
+t1=$(date +%s.%N)
+kill -INT -- "-$pid" 2>/dev/null || true
+wait "$pid" 2>/dev/null || true
+[ -n "$ready" ] || { cat "$log"; echo "not ready within 60 s" >&2; exit 1; }
+printf 'start-to-ready: %.1f s (%s cores, node %s)\n' "$(echo "$t1 - $t0" | bc)" "$(nproc)" "$(node --version)"
