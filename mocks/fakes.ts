@@ -1,10 +1,7 @@
-/**
- * Local stand-ins for hosted services (mail, payments). Each fake starts on a loopback port
- * and returns a stop function; mocks/run-fakes.ts runs them all under one process.
- */
-export type Fake = {
-  name: string;
-  start: () => Promise<{ url: string; stop: () => Promise<void> }>;
-};
+import type { Fake } from "@/mocks/fake";
+import { mailFake } from "@/mocks/mail/smtp-fake";
 
-export const fakes: Fake[] = [];
+export type { Fake } from "@/mocks/fake";
+
+/** Every local fake, started by `npm start` and the end-to-end tier. */
+export const fakes: Fake[] = [mailFake];

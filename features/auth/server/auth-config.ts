@@ -5,10 +5,11 @@ import Nodemailer from "next-auth/providers/nodemailer";
 import { DrizzleAdapter } from "@auth/drizzle-adapter";
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { accounts, memberships, sessions, users, verificationTokens } from "@/db/schema";
+import { accounts, sessions, users, verificationTokens } from "@/db/schema";
 import { getEnv } from "@/lib/env";
 import { ZSignInInput } from "@/features/auth/schemas/sign-in";
 import { recordAudit } from "@/features/auth/server/audit";
+import { dealershipIdsOf } from "@/features/auth/server/dealership-ids-of";
 import { getMailer } from "@/features/auth/server/mailer";
 import { magicLinkMail } from "@/features/auth/server/mail-templates";
 import { verifyPassword } from "@/lib/authz/password";
@@ -18,14 +19,6 @@ import { checkSignInLimits, clientIp } from "@/features/auth/server/sign-in-limi
 /** Thrown when too many attempts came from one address or IP; the form shows a wait message. */
 class RateLimitedSignIn extends CredentialsSignin {
   override code = "rate_limited";
-}
-
-async function dealershipIdsOf(userId: string): Promise<string[]> {
-  const rows = await getDb()
-    .select({ id: memberships.dealershipId })
-    .from(memberships)
-    .where(eq(memberships.userId, userId));
-  return [...new Set(rows.map((r) => r.id))];
 }
 
 async function findUserByEmail(email: string) {
@@ -42,7 +35,7 @@ async function authorizePassword(raw: unknown, request: Request) {
   const ip = clientIp(request?.headers);
   const limit = await checkSignInLimits(db, { kind: "password", email, ip });
   const user = await findUserByEmail(email);
-  const dealershipIds = user ? await dealershipIdsOf(user.id) : [];
+  const dealershipIds = user ? await dealershipIdsOf(getDb(), user.id) : [];
   if (!limit.allowed) {
     await recordAudit(db, { kind: "sign_in_rate_limited", dealershipIds, subject: email, ip });
     throw new RateLimitedSignIn();
@@ -105,7 +98,7 @@ function buildConfig(): NextAuthConfig {
           if (!user) return;
           await recordAudit(db, {
             kind: "magic_link_requested",
-            dealershipIds: await dealershipIdsOf(user.id),
+            dealershipIds: await dealershipIdsOf(getDb(), user.id),
             actorUserId: user.id,
             subject: identifier,
             ip,
@@ -134,7 +127,7 @@ function buildConfig(): NextAuthConfig {
         if (account?.provider !== "nodemailer" || !user.id) return;
         await recordAudit(db, {
           kind: "sign_in",
-          dealershipIds: await dealershipIdsOf(user.id),
+          dealershipIds: await dealershipIdsOf(getDb(), user.id),
           actorUserId: user.id,
           subject: user.email,
           detail: { method: "magic-link" },
