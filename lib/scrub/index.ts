@@ -5,4 +5,33 @@
 export { ENGINE_VERSION } from "./version";
 export * from "./schemas";
 export { estimate } from "./estimate";
-export * from "./segment-turns";
+
+// Primitives (object arguments, SI units, degrees at the boundary).
+export { idealSteerAngles } from "./ideal-steer-angles";
+export { linkageOuterAngle } from "./linkage-outer-angle";
+export { articulatedRadii } from "./articulated-radii";
+export { tyreDimensions, type TTyreDimensions } from "./tyre-dimensions";
+export { frontAxleLead, leadInTurn } from "./front-axle-lead";
+export { brushTyre } from "./brush-tyre";
+export { equilibriumTurn, type TEquilibriumWheelInput } from "./equilibrium-turn";
+export {
+  estimateRollingCircumference,
+  nominalRollingCircumference,
+  rollingCircumferenceIndex,
+} from "./rolling-circumference";
+
+// Steering comparison helpers.
+export {
+  angleErrorCurve,
+  percentAckermann,
+  PERCENT_ACKERMANN_DEFINITION,
+  turningDiameter,
+  type TAngleErrorPoint,
+} from "./steering-comparison";
+
+// Defaults the UI may show next to user overrides.
+export { DEFAULT_SURFACES } from "./surfaces";
+export { STANDING_CAUTIONS } from "./cautions";
+export * as ENGINE_COEFFICIENTS from "./coefficients";
+
+// Turn segmentation (added by its owner): export { segmentTurns } from "./segment-turns";

@@ -372,8 +372,8 @@ export interface TWheelTurnResult {
   steerAngle: number;
   /** Slip angle, positive = wheel points left of its path (deg). */
   slipAngle: number;
-  /** Path radius of the tyre contact centre about the turning centre (m; Infinity in crab). */
-  pathRadius: number;
+  /** Path radius of the tyre contact centre about the turning centre (m); null in crab. */
+  pathRadius: number | null;
   /** Lateral scrub (sliding) distance (m). */
   lateralScrub: number;
   /** Longitudinal scrub distance from lead, wind-up, locked differentials, skid slip (m). */
@@ -402,8 +402,8 @@ export interface TTurnResult {
   steerInput: number;
   /** Turning centre in the body frame (m), null in crab traverses. */
   turningCentre: { x: number; y: number } | null;
-  /** Outer tyre contact path diameter (m), ISO 7457 / SAE J695 sense. */
-  turningDiameter: number;
+  /** Outer tyre contact path diameter (m), ISO 7457 / SAE J695 sense; null in crab. */
+  turningDiameter: number | null;
   /** Lateral acceleration at the reference point (m/s²). */
   lateralAcceleration: number;
   /** Effective front-axle lead in this turn (fraction), null when not four-wheel driven. */

@@ -370,7 +370,8 @@ export function createTurnSegmenter(options: TSegmentOptions = {}): TTurnSegment
       if (step.restart) restart();
       buf.push(step);
       drain(false);
-      return out.splice(0, out.length);
+      // Most samples finish no turn: skip allocating an empty array for each of them.
+      return out.length === 0 ? [] : out.splice(0, out.length);
     },
     finish() {
       restart();

@@ -1,0 +1,32 @@
+import type { TCaution } from "./schemas";
+
+/**
+ * Standing safety cautions shown with every estimate (PHYSICS.md §10: trade practice and
+ * judgement). Wording is Treadcast's own.
+ */
+export const STANDING_CAUTIONS: readonly TCaution[] = [
+  {
+    code: "estimate-only",
+    text: "These figures are engineering estimates, not warranty, load or safety ratings. The tyre and machine makers' data, local rules and qualified tyre technicians decide every load, pressure and speed setting.",
+  },
+  {
+    code: "load-speed-pressure",
+    text: "Never run a tyre above its load index or ply rating for the actual speed. Weigh the machine and set pressures from the tyre maker's load–speed–pressure table; check again when ballast, implements or loaders change, and raise field pressures before road travel.",
+  },
+  {
+    code: "speed-symbol",
+    text: "Fit tyres whose speed symbol covers the machine's maximum design speed. IF/VF tyres reach their rating only at the specified pressures and on rims rated for them.",
+  },
+  {
+    code: "lead-matching",
+    text: "When changing tyre sizes or brands, keep front/rear rolling circumferences within the machine maker's lead specification and replace tyres in axle sets.",
+  },
+  {
+    code: "mounting-hazard",
+    text: "Mounting, inflating and rim work on large agricultural and industrial tyres can cause explosive separation: leave it to trained technicians using cages and remote inflation.",
+  },
+  {
+    code: "stability",
+    text: "Articulated, rear-steer and loader machines lose stability when steering with a raised load; rear-steer tail swing needs clearance.",
+  },
+];
