@@ -33,8 +33,19 @@ step "typecheck" node_modules/.bin/tsc --noEmit
 step "lint" node_modules/.bin/eslint --max-warnings=0 .
 step "format" node_modules/.bin/prettier --check . --log-level warn
 step "migrate" node_modules/.bin/tsx scripts/migrate.ts
-step "unit tests" node_modules/.bin/vitest run --project unit
-step "integration tests" node_modules/.bin/vitest run --project integration
+REPORTS="$(mktemp -d)"
+vitest_tier() { node_modules/.bin/vitest run --project "$1" --reporter=default --reporter=json --outputFile="$REPORTS/$1.json"; }
+step "unit tests" vitest_tier unit
+step "integration tests" vitest_tier integration
 step "production build" env MAILBOX_ENABLED=true node_modules/.bin/next build
-step "end-to-end tests" node_modules/.bin/vitest run --project e2e
+step "end-to-end tests" vitest_tier e2e
 log "all tiers passed"
+# One closing line over every tier, in the plain "N passed, N failed" form.
+node -e '
+const fs = require("fs"); let p = 0, f = 0, s = 0;
+for (const file of fs.readdirSync(process.argv[1])) {
+  const r = JSON.parse(fs.readFileSync(process.argv[1] + "/" + file, "utf8"));
+  p += r.numPassedTests; f += r.numFailedTests; s += r.numPendingTests + (r.numTodoTests || 0);
+}
+console.log(`${p} passed, ${f} failed, ${s} skipped`);
+' "$REPORTS"
