@@ -41,7 +41,7 @@ log "seeding demo data"
 node_modules/.bin/tsx scripts/seed.ts
 
 # Rebuild only when a source file is newer than the last build.
-if [ ! -f .next/BUILD_ID ] || [ -n "$(find app features lib db components public mocks next.config.mjs tailwind.config.ts package-lock.json -newer .next/BUILD_ID -type f -print -quit 2>/dev/null)" ]; then
+if build_is_stale .next; then
   log "building the production app (next build)"
   node_modules/.bin/next build >/tmp/treadcast-build.log 2>&1 || { tail -40 /tmp/treadcast-build.log; fail "next build failed"; }
 fi

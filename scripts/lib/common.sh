@@ -89,3 +89,10 @@ pg_down() {
 port_busy() {
   (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null
 }
+
+# True when there is no production build in DIR (default .next) or a source file is newer than it.
+build_is_stale() {
+  local dir="${1:-.next}"
+  [ ! -f "$dir/BUILD_ID" ] && return 0
+  [ -n "$(find app features lib db public mocks next.config.mjs tailwind.config.ts postcss.config.mjs package-lock.json -newer "$dir/BUILD_ID" -type f -print -quit 2>/dev/null)" ]
+}
