@@ -21,7 +21,8 @@ const HEADER = [
   "energy_per_hour_j",
 ];
 
-const round = (v: number, digits = 4) => (Number.isFinite(v) ? Number(v.toFixed(digits)) : null);
+const round = (v: number | null, digits = 4) =>
+  v !== null && Number.isFinite(v) ? Number(v.toFixed(digits)) : null;
 
 /** One row per turn kind and wheel position (one row per turn when it has no wheel detail), SI units. */
 export function estimateTurnsCsv(result: TEstimateResult): string {

@@ -1,0 +1,77 @@
+import {
+  keepPreviousData,
+  queryOptions,
+  useMutation,
+  useQuery,
+  useQueryClient,
+} from "@tanstack/react-query";
+import type { TPage } from "@/features/workspace/schemas/list-query";
+import type {
+  TEstimateCreate,
+  TEstimateDto,
+  TEstimateRow,
+} from "@/features/workspace/schemas/estimate";
+import { apiFetch, toQueryString } from "@/features/workspace/api/http";
+import { listParams, type TListState } from "@/features/workspace/api/list-state";
+
+export const estimateKeys = {
+  all: ["estimates"] as const,
+  lists: () => [...estimateKeys.all, "list"] as const,
+  list: (state: TListState) => [...estimateKeys.lists(), state] as const,
+  detail: (id: string) => [...estimateKeys.all, "detail", id] as const,
+};
+
+export const estimateListOptions = (state: TListState) =>
+  queryOptions({
+    queryKey: estimateKeys.list(state),
+    queryFn: () =>
+      apiFetch<TPage<TEstimateRow>>(`/api/v1/estimates${toQueryString(listParams(state))}`),
+    placeholderData: keepPreviousData,
+  });
+
+export const estimateOptions = (id: string) =>
+  queryOptions({
+    queryKey: estimateKeys.detail(id),
+    queryFn: () => apiFetch<TEstimateDto>(`/api/v1/estimates/${id}`),
+    // A stored estimate never changes.
+    staleTime: Infinity,
+  });
+
+export const useEstimates = (state: TListState) => useQuery(estimateListOptions(state));
+export const useEstimate = (id: string) => useQuery(estimateOptions(id));
+
+export function useCreateEstimate() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: TEstimateCreate) =>
+      apiFetch<TEstimateDto>("/api/v1/estimates", { method: "POST", body: input }),
+    onSuccess: (e) => {
+      qc.setQueryData(estimateKeys.detail(e.id), e);
+      return qc.invalidateQueries({ queryKey: estimateKeys.lists() });
+    },
+  });
+}
+
+export function useDeleteEstimate() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) =>
+      apiFetch(`/api/v1/estimates/${id}?confirm=true`, { method: "DELETE" }),
+    onMutate: async (id) => {
+      await qc.cancelQueries({ queryKey: estimateKeys.lists() });
+      const previous = qc.getQueriesData<TPage<TEstimateRow>>({ queryKey: estimateKeys.lists() });
+      for (const [key, page] of previous)
+        if (page)
+          qc.setQueryData(key, {
+            ...page,
+            items: page.items.filter((e) => e.id !== id),
+            total: page.total - 1,
+          });
+      return { previous };
+    },
+    onError: (_e, _id, ctx) => {
+      for (const [key, page] of ctx?.previous ?? []) qc.setQueryData(key, page);
+    },
+    onSettled: () => qc.invalidateQueries({ queryKey: estimateKeys.lists() }),
+  });
+}

@@ -1,0 +1,101 @@
+import {
+  keepPreviousData,
+  queryOptions,
+  useMutation,
+  useQuery,
+  useQueryClient,
+} from "@tanstack/react-query";
+import type { TPage } from "@/features/workspace/schemas/list-query";
+import type {
+  TMachineDto,
+  TMachineRecordInput,
+  TMachineRecordPatch,
+  TMachineRow,
+} from "@/features/workspace/schemas/machine";
+import { apiFetch, toQueryString } from "@/features/workspace/api/http";
+import { listParams, type TListState } from "@/features/workspace/api/list-state";
+
+export const machineKeys = {
+  all: ["machines"] as const,
+  lists: () => [...machineKeys.all, "list"] as const,
+  list: (state: TListState) => [...machineKeys.lists(), state] as const,
+  detail: (id: string) => [...machineKeys.all, "detail", id] as const,
+};
+
+export const machineListOptions = (state: TListState) =>
+  queryOptions({
+    queryKey: machineKeys.list(state),
+    queryFn: () =>
+      apiFetch<TPage<TMachineRow>>(`/api/v1/machines${toQueryString(listParams(state))}`),
+    placeholderData: keepPreviousData,
+  });
+
+export const machineOptions = (id: string) =>
+  queryOptions({
+    queryKey: machineKeys.detail(id),
+    queryFn: () => apiFetch<TMachineDto>(`/api/v1/machines/${id}`),
+  });
+
+export const useMachines = (state: TListState) => useQuery(machineListOptions(state));
+export const useMachine = (id: string) => useQuery(machineOptions(id));
+
+export function useCreateMachine() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: TMachineRecordInput) =>
+      apiFetch<TMachineDto>("/api/v1/machines", { method: "POST", body: input }),
+    onSuccess: (m) => {
+      qc.setQueryData(machineKeys.detail(m.id), m);
+      return qc.invalidateQueries({ queryKey: machineKeys.lists() });
+    },
+  });
+}
+
+export function useUpdateMachine(id: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (patch: TMachineRecordPatch) =>
+      apiFetch<TMachineDto>(`/api/v1/machines/${id}`, { method: "PATCH", body: patch }),
+    onSuccess: (m) => {
+      qc.setQueryData(machineKeys.detail(id), m);
+      return qc.invalidateQueries({ queryKey: machineKeys.lists() });
+    },
+  });
+}
+
+export function useCopyMachine() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, customerId, name }: { id: string; customerId: string; name?: string }) =>
+      apiFetch<TMachineDto>(`/api/v1/machines/${id}/copy`, {
+        method: "POST",
+        body: { customerId, name },
+      }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: machineKeys.lists() }),
+  });
+}
+
+/** Takes the row out of every cached list at once; restores the lists if the server refuses. */
+export function useDeleteMachine() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) =>
+      apiFetch(`/api/v1/machines/${id}?confirm=true`, { method: "DELETE" }),
+    onMutate: async (id) => {
+      await qc.cancelQueries({ queryKey: machineKeys.lists() });
+      const previous = qc.getQueriesData<TPage<TMachineRow>>({ queryKey: machineKeys.lists() });
+      for (const [key, page] of previous)
+        if (page)
+          qc.setQueryData(key, {
+            ...page,
+            items: page.items.filter((m) => m.id !== id),
+            total: page.total - 1,
+          });
+      return { previous };
+    },
+    onError: (_e, _id, ctx) => {
+      for (const [key, page] of ctx?.previous ?? []) qc.setQueryData(key, page);
+    },
+    onSettled: () => qc.invalidateQueries({ queryKey: machineKeys.all }),
+  });
+}

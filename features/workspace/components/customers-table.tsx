@@ -1,0 +1,78 @@
+"use client";
+
+import Link from "next/link";
+import { useState } from "react";
+import type { ColumnDef } from "@tanstack/react-table";
+import type { TCustomerRow } from "@/features/workspace/schemas/customer";
+import { useCustomers } from "@/features/workspace/api/customers";
+import { DEFAULT_LISTS, type TListState } from "@/features/workspace/api/list-state";
+import { ServerDataTable } from "@/features/workspace/components/server-data-table";
+import { formatDate } from "@/features/workspace/components/format";
+import { EmptyState } from "@/lib/ui/empty-state";
+
+const columns: ColumnDef<TCustomerRow, unknown>[] = [
+  {
+    id: "name",
+    header: "Customer",
+    enableHiding: false,
+    cell: ({ row }) => (
+      <Link
+        href={`/customers/${row.original.id}`}
+        className="font-medium text-furrow-700 hover:underline"
+      >
+        {row.original.name}
+      </Link>
+    ),
+  },
+  { id: "kind", header: "Kind", cell: ({ row }) => row.original.kind },
+  {
+    id: "contactName",
+    header: "Contact",
+    enableSorting: false,
+    cell: ({ row }) => row.original.contactName ?? "—",
+  },
+  {
+    id: "siteCount",
+    header: "Sites",
+    enableSorting: false,
+    cell: ({ row }) => row.original.siteCount,
+  },
+  {
+    id: "machineCount",
+    header: "Machines",
+    enableSorting: false,
+    cell: ({ row }) => row.original.machineCount,
+  },
+  { id: "updatedAt", header: "Updated", cell: ({ row }) => formatDate(row.original.updatedAt) },
+];
+
+export function CustomersTable({ canWrite }: { canWrite: boolean }) {
+  const [state, setState] = useState<TListState>(DEFAULT_LISTS.customers);
+  const query = useCustomers(state);
+  return (
+    <ServerDataTable
+      caption="Customers"
+      columns={columns}
+      state={state}
+      onStateChange={setState}
+      query={query}
+      searchLabel="Find a customer"
+      getRowId={(r) => r.id}
+      initiallyHidden={["updatedAt"]}
+      empty={
+        <EmptyState
+          title="No customers yet"
+          action={
+            canWrite ? (
+              <Link href="/customers/new" className="font-medium text-furrow-700 underline">
+                Add the first customer
+              </Link>
+            ) : undefined
+          }
+        >
+          Customers hold their sites, machines, duty cycles and estimates.
+        </EmptyState>
+      }
+    />
+  );
+}

@@ -1,0 +1,68 @@
+/**
+ * Display units. The engine and the API work in SI (m, mm, kg); a user who prefers imperial
+ * sees inches, feet and pounds. Factors are exact by definition (NIST SP 811, Appendix B:
+ * 1 in = 0.0254 m, 1 ft = 0.3048 m, 1 lb = 0.45359237 kg).
+ */
+export type TUnitSystem = "metric" | "imperial";
+export type TQuantity = "length-m" | "length-mm" | "mass-kg" | "distance-m" | "none";
+
+const M_PER_IN = 0.0254;
+const M_PER_FT = 0.3048;
+const KG_PER_LB = 0.45359237;
+
+type TUnitDef = { label: string; fromSi: (v: number) => number; toSi: (v: number) => number };
+
+const identity = (v: number) => v;
+
+const UNITS: Record<TUnitSystem, Record<TQuantity, TUnitDef>> = {
+  metric: {
+    "length-m": { label: "m", fromSi: identity, toSi: identity },
+    "length-mm": { label: "mm", fromSi: identity, toSi: identity },
+    "mass-kg": { label: "kg", fromSi: identity, toSi: identity },
+    "distance-m": { label: "m", fromSi: identity, toSi: identity },
+    none: { label: "", fromSi: identity, toSi: identity },
+  },
+  imperial: {
+    // Machine dimensions in inches, as imperial spec sheets give wheelbase and track.
+    "length-m": { label: "in", fromSi: (v) => v / M_PER_IN, toSi: (v) => v * M_PER_IN },
+    "length-mm": {
+      label: "in",
+      fromSi: (v) => v / 1000 / M_PER_IN,
+      toSi: (v) => v * M_PER_IN * 1000,
+    },
+    "mass-kg": { label: "lb", fromSi: (v) => v / KG_PER_LB, toSi: (v) => v * KG_PER_LB },
+    // Turning circles and paths in feet.
+    "distance-m": { label: "ft", fromSi: (v) => v / M_PER_FT, toSi: (v) => v * M_PER_FT },
+    none: { label: "", fromSi: identity, toSi: identity },
+  },
+};
+
+export function unitLabel(system: TUnitSystem, quantity: TQuantity): string {
+  return UNITS[system][quantity].label;
+}
+
+export function fromSi(system: TUnitSystem, quantity: TQuantity, value: number): number {
+  return UNITS[system][quantity].fromSi(value);
+}
+
+export function toSi(system: TUnitSystem, quantity: TQuantity, value: number): number {
+  return UNITS[system][quantity].toSi(value);
+}
+
+/** Rounds for display so a converted value does not show float noise (4 significant decimals). */
+export function roundForInput(value: number): number {
+  return Math.round(value * 10_000) / 10_000;
+}
+
+/** "12.3 ft" / "3.75 m" with sensible decimals. */
+export function formatQuantity(
+  system: TUnitSystem,
+  quantity: TQuantity,
+  si: number,
+  digits = 2,
+): string {
+  if (!Number.isFinite(si)) return "—";
+  const v = fromSi(system, quantity, si);
+  const label = unitLabel(system, quantity);
+  return `${v.toLocaleString("en-GB", { maximumFractionDigits: digits, minimumFractionDigits: 0 })}${label ? ` ${label}` : ""}`;
+}
