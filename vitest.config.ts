@@ -14,6 +14,9 @@ export default defineConfig({
     },
   },
   test: {
+    // next-auth imports "next/server" without an extension, which Node's ESM loader rejects;
+    // inlining lets Vite resolve it.
+    server: { deps: { inline: ["next-auth"] } },
     projects: [
       {
         extends: true,

@@ -69,6 +69,13 @@ function buildConfig(): NextAuthConfig {
   return {
     secret: env.AUTH_SECRET,
     trustHost: true,
+    logger: {
+      // A wrong password is routine and already in the audit log; keep the server log for faults.
+      error(error) {
+        if (error.name === "CredentialsSignin") return;
+        console.error("[auth]", error);
+      },
+    },
     adapter: DrizzleAdapter(db, {
       usersTable: users,
       accountsTable: accounts,
