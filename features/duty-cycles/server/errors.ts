@@ -1,0 +1,38 @@
+import type { z } from "zod";
+
+/** A refusal a route handler answers as JSON `{ error: { code, message, fieldErrors? } }`. */
+export class DutyCycleError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fieldErrors?: Record<string, string[]>,
+  ) {
+    super(message);
+    this.name = "DutyCycleError";
+  }
+}
+
+export const notFoundError = (what: string) =>
+  new DutyCycleError(404, "not_found", `No ${what} with that id in your dealership.`);
+
+export const forbiddenError = (what: string) =>
+  new DutyCycleError(403, "forbidden", `Your role may not change ${what}.`);
+
+/** Parses with a schema or throws a 400 that lists every field to fix. */
+export function parseInput<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
+  const parsed = schema.safeParse(value);
+  if (parsed.success) return parsed.data;
+  const fieldErrors: Record<string, string[]> = {};
+  for (const issue of parsed.error.issues) {
+    const key = issue.path.map(String).join(".") || "_";
+    (fieldErrors[key] ??= []).push(issue.message);
+  }
+  const [field, messages] = Object.entries(fieldErrors)[0]!;
+  throw new DutyCycleError(
+    400,
+    "invalid_input",
+    `Please fix the input. ${field === "_" ? "" : `${field}: `}${messages[0]}`,
+    fieldErrors,
+  );
+}

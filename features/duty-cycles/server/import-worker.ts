@@ -1,0 +1,44 @@
+// The worker process's loop; started by scripts/worker.ts and by the integration tests.
+import PgBoss from "pg-boss";
+import type { Db } from "@/db/client";
+import {
+  IMPORT_JOB_OPTIONS,
+  IMPORT_QUEUE,
+  type TImportJob,
+} from "@/features/duty-cycles/server/import-queue";
+import { runImport } from "@/features/duty-cycles/server/run-import";
+
+/**
+ * Works import jobs one at a time per worker (an import is CPU-bound; run more workers, on
+ * other machines if need be, for more throughput). Returns a stop function.
+ */
+export async function startImportWorker({
+  db,
+  connectionString,
+  log = console.log,
+}: {
+  db: Db;
+  connectionString: string;
+  log?: (message: string) => void;
+}): Promise<{ stop: () => Promise<void>; boss: PgBoss }> {
+  const boss = new PgBoss({ connectionString, max: 3 });
+  boss.on("error", (e) => console.error("[worker]", e));
+  await boss.start();
+  await boss.createQueue(IMPORT_QUEUE, { name: IMPORT_QUEUE, ...IMPORT_JOB_OPTIONS });
+  await boss.work<TImportJob>(
+    IMPORT_QUEUE,
+    { batchSize: 1, pollingIntervalSeconds: 0.5 },
+    async ([job]) => {
+      if (!job) return;
+      const started = Date.now();
+      const outcome = await runImport({ db, dutyCycleId: job.data.dutyCycleId });
+      log(`[worker] duty cycle ${job.data.dutyCycleId}: ${outcome} in ${Date.now() - started} ms`);
+    },
+  );
+  return {
+    boss,
+    stop: async () => {
+      await boss.stop({ graceful: true, wait: true, timeout: 10_000 });
+    },
+  };
+}

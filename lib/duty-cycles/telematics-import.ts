@@ -1,0 +1,323 @@
+/**
+ * Reads a telematics log row by row: validates and converts each row with the column mapping,
+ * feeds the turn segmenter, and keeps running totals. Holds no rows, so memory stays flat
+ * however long the log is.
+ */
+import type { TSurfaceKind } from "@/lib/scrub/schemas";
+import {
+  createTurnSegmenter,
+  type TDetectedTurn,
+  type TSegmentOptions,
+  type TTurnSample,
+} from "@/lib/scrub/segment-turns";
+import type { TColumnMapping, TColumnRef } from "@/lib/duty-cycles/column-mapping";
+import { parseDecimal, parseTime, toSi, formatKmh } from "@/lib/duty-cycles/units";
+import { parseLoadState, parseReverse, parseSurface } from "@/lib/duty-cycles/surface-names";
+import {
+  ImportFailure,
+  RowErrorLog,
+  columnName,
+  tooFewRowsFailure,
+} from "@/lib/duty-cycles/row-errors";
+import {
+  SPEED_BIN_WIDTH,
+  SPEED_BINS,
+  type TSpeedHistogram,
+  type TStoredTurn,
+  type TStraight,
+} from "@/lib/duty-cycles/stored-duty-cycle";
+import type { TRowError } from "@/lib/duty-cycles/row-errors";
+
+export type TImportResult = {
+  turns: TStoredTurn[];
+  straight: TStraight;
+  /** Operating hours covered by the log (hour meter when mapped, else logged time). */
+  operatingHours: number | null;
+  rowsUsed: number;
+  rowsSkipped: number;
+  errors: TRowError[];
+  errorCount: number;
+  speedHistogram: TSpeedHistogram | null;
+};
+
+export type TRowImporter = {
+  /** One parsed CSV record; `line` is its line in the file. */
+  pushRow(fields: readonly string[], line: number): void;
+  /** Ends the file; throws ImportFailure when it cannot make a duty cycle. */
+  finish(): TImportResult;
+};
+
+export type TImportOptions = { maxStoredErrors?: number; segment?: TSegmentOptions };
+
+const MAX_GAP = 10; // s: a longer pause in the log is not operating time (matches the segmenter)
+const MAX_YAW_RATE = 360; // deg/s: faster is a sensor fault, no machine spins that fast
+const MAX_ENGINE_SPEED = 20; // m/s: the engine's limit for a turn
+
+type Reader = { ref: TColumnRef; name: string };
+
+export function createTelematicsImporter(
+  mapping: TColumnMapping,
+  options: TImportOptions = {},
+): TRowImporter {
+  const log = new RowErrorLog(options.maxStoredErrors ?? 10_000);
+  const { decimal, defaults } = mapping;
+  const read = (role: keyof TColumnMapping["columns"]): Reader | undefined => {
+    const ref = mapping.columns[role];
+    return ref ? { ref, name: columnName(ref) } : undefined;
+  };
+  const time = read("time");
+  const speed = read("speed");
+  if (!time || !speed) throw new ImportFailure("Map the time and speed columns first.");
+  const yaw = read("yawRate");
+  const heading = read("heading");
+  const steer = read("steer");
+  const lat = read("lat");
+  const lon = read("lon");
+  const surface = read("surface");
+  const load = read("load");
+  const direction = read("direction");
+  const hourMeter = read("hourMeter");
+  const widest = Math.max(...Object.values(mapping.columns).map((c) => c.index)) + 1;
+
+  const segmenter = createTurnSegmenter({ wheelbase: defaults.wheelbase, ...options.segment });
+  const detected: TDetectedTurn[] = [];
+  let used = 0;
+  let prevT = NaN;
+  let logStart = 0;
+  let prevSpeed = 0;
+  let prevSurface: TSurfaceKind = defaults.surface;
+  let prevLaden = defaults.loadState === "laden";
+  let seconds = 0;
+  let distance = 0;
+  let ladenDistance = 0;
+  const surfaceDistance = new Map<TSurfaceKind, number>();
+  const histogram = new Array<number>(SPEED_BINS).fill(0);
+  let firstHours = NaN;
+  let lastHours = NaN;
+
+  /** Optional numeric cell: undefined when empty, NaN when not a number. */
+  function optionalNumber(fields: readonly string[], r: Reader | undefined): number | undefined {
+    if (!r) return undefined;
+    const cell = fields[r.ref.index]!;
+    if (cell.trim() === "") return undefined;
+    return toSi(parseDecimal(cell, decimal), r.ref.unit);
+  }
+
+  function pushRow(fields: readonly string[], line: number) {
+    if (fields.length < widest) {
+      log.add(
+        line,
+        "(row)",
+        `has ${fields.length} fields; the mapping needs at least ${widest}`,
+        fields.join(mapping.delimiter).slice(0, 200),
+      );
+      return;
+    }
+    const tCell = fields[time!.ref.index]!;
+    const t = parseTime(tCell, time!.ref.unit, decimal);
+    if (!Number.isFinite(t))
+      return log.add(line, time!.name, "is not a time in the chosen unit", tCell);
+    if (t < prevT)
+      return log.add(
+        line,
+        time!.name,
+        `goes back in time (${(prevT - t).toFixed(3)} s before the row above)`,
+        tCell,
+      );
+    if (t === prevT) return log.add(line, time!.name, "repeats the time of the row above", tCell);
+    const vCell = fields[speed!.ref.index]!;
+    const v = toSi(parseDecimal(vCell, decimal), speed!.ref.unit);
+    if (!Number.isFinite(v)) return log.add(line, speed!.name, "is not a number", vCell);
+    if (Math.abs(v) > defaults.maxSpeed)
+      return log.add(
+        line,
+        speed!.name,
+        `${formatKmh(Math.abs(v))} is beyond what the machine can reach (limit ${formatKmh(defaults.maxSpeed)})`,
+        vCell,
+      );
+    const sample: TTurnSample = { t, speed: v };
+    const yawRate = optionalNumber(fields, yaw);
+    if (yawRate !== undefined) {
+      if (!Number.isFinite(yawRate) || Math.abs(yawRate) > MAX_YAW_RATE)
+        return log.add(
+          line,
+          yaw!.name,
+          Number.isFinite(yawRate)
+            ? `${yawRate.toFixed(0)} deg/s is not a possible yaw rate`
+            : "is not a number",
+          fields[yaw!.ref.index]!,
+        );
+      sample.yawRate = yawRate;
+    }
+    const h = optionalNumber(fields, heading);
+    if (h !== undefined) {
+      if (!Number.isFinite(h) || h < -360 || h > 720)
+        return log.add(
+          line,
+          heading!.name,
+          "is not a compass heading",
+          fields[heading!.ref.index]!,
+        );
+      sample.heading = h;
+    }
+    const delta = optionalNumber(fields, steer);
+    if (delta !== undefined) {
+      if (!Number.isFinite(delta) || Math.abs(delta) >= 89)
+        return log.add(
+          line,
+          steer!.name,
+          "is not a possible steer angle (under 89° either way)",
+          fields[steer!.ref.index]!,
+        );
+      sample.steer = delta;
+    }
+    const la = optionalNumber(fields, lat);
+    const lo = optionalNumber(fields, lon);
+    if (la !== undefined || lo !== undefined) {
+      if (la === undefined || !Number.isFinite(la) || Math.abs(la) > 90)
+        return log.add(
+          line,
+          lat!.name,
+          "is not a latitude in decimal degrees",
+          fields[lat!.ref.index]!,
+        );
+      if (lo === undefined || !Number.isFinite(lo) || Math.abs(lo) > 180)
+        return log.add(
+          line,
+          lon!.name,
+          "is not a longitude in decimal degrees",
+          fields[lon!.ref.index]!,
+        );
+      sample.lat = la;
+      sample.lon = lo;
+    }
+    let surf = defaults.surface;
+    if (surface) {
+      const cell = fields[surface.ref.index]!;
+      if (cell.trim() !== "") {
+        const s = parseSurface(cell);
+        if (!s)
+          return log.add(
+            line,
+            surface.name,
+            "is not a surface we know (concrete, gravel, firm soil, loose soil, grass)",
+            cell,
+          );
+        surf = s;
+      }
+    }
+    let laden = defaults.loadState === "laden";
+    if (load) {
+      const cell = fields[load.ref.index]!;
+      if (cell.trim() !== "") {
+        const l = parseLoadState(cell);
+        if (!l) return log.add(line, load.name, "is not a load state (laden or empty)", cell);
+        laden = l === "laden";
+      }
+    }
+    if (direction) {
+      const cell = fields[direction.ref.index]!;
+      if (cell.trim() !== "") {
+        const r = parseReverse(cell);
+        if (r === undefined)
+          return log.add(
+            line,
+            direction.name,
+            "is not a travel direction (forward or reverse)",
+            cell,
+          );
+        sample.reverse = r;
+      }
+    }
+    const hm = optionalNumber(fields, hourMeter);
+    if (hm !== undefined) {
+      if (!Number.isFinite(hm) || hm < lastHours)
+        return log.add(
+          line,
+          hourMeter!.name,
+          Number.isFinite(hm) ? "runs backwards" : "is not a number",
+          fields[hourMeter!.ref.index]!,
+        );
+      if (Number.isNaN(firstHours)) firstHours = hm;
+      lastHours = hm;
+    }
+    sample.surface = surf;
+    sample.laden = laden;
+
+    const dt = t - prevT;
+    if (dt > 0 && dt <= MAX_GAP) {
+      const ds = ((Math.abs(prevSpeed) + Math.abs(v)) / 2) * dt;
+      seconds += dt;
+      distance += ds;
+      if (prevLaden) ladenDistance += ds;
+      surfaceDistance.set(prevSurface, (surfaceDistance.get(prevSurface) ?? 0) + ds);
+      const bin = Math.min(SPEED_BINS - 1, Math.floor(Math.abs(prevSpeed) / SPEED_BIN_WIDTH));
+      histogram[bin]! += dt;
+    }
+    if (used === 0) logStart = t;
+    prevT = t;
+    prevSpeed = v;
+    prevSurface = surf;
+    prevLaden = laden;
+    used++;
+    const done = segmenter.push(sample);
+    if (done.length > 0) detected.push(...done);
+  }
+
+  function finish(): TImportResult {
+    detected.push(...segmenter.finish());
+    if (used < 2 || log.count > used) throw tooFewRowsFailure(used, log.count, log);
+    const meterHours = lastHours - firstHours;
+    const hours = Number.isFinite(meterHours) && meterHours > 0 ? meterHours : seconds / 3600;
+    if (!(hours * 3600 >= 60))
+      throw new ImportFailure(
+        "The log covers less than a minute of work: upload a longer log so turns per hour mean something.",
+        log.errors,
+        log.count,
+      );
+    let turnDistance = 0;
+    const turns: TStoredTurn[] = detected.map((d, i) => {
+      turnDistance += d.distance;
+      return {
+        seq: i + 1,
+        label: d.pivot ? "pivot" : null,
+        direction: d.direction,
+        radius: d.radius,
+        steerInput: null,
+        headingChange: d.headingChange,
+        speed: Math.min(d.speed, MAX_ENGINE_SPEED),
+        perHour: 1 / hours,
+        surface: (d.surface as TSurfaceKind | undefined) ?? defaults.surface,
+        loadState: d.laden === undefined ? defaults.loadState : d.laden ? "laden" : "unladen",
+        reverse: d.reverse,
+        distance: d.distance,
+        duration: d.end - d.start,
+        startTime: d.start - logStart,
+      };
+    });
+    const straightDistance = Math.max(0, distance - turnDistance);
+    const turningSeconds = detected.reduce((s, d) => s + (d.end - d.start), 0);
+    const movingSeconds = histogram.reduce((s, x, i) => (i === 0 ? s : s + x), 0);
+    const straightSeconds = Math.max(1, movingSeconds - turningSeconds);
+    const shares: Partial<Record<TSurfaceKind, number>> = {};
+    for (const [k, d] of surfaceDistance) if (d > 0) shares[k] = d / Math.max(distance, 1e-9);
+    if (Object.keys(shares).length === 0) shares[defaults.surface] = 1;
+    return {
+      turns,
+      straight: {
+        distancePerHour: straightDistance / hours,
+        speed: Math.min(MAX_ENGINE_SPEED, straightDistance / straightSeconds),
+        surfaceShares: shares,
+        ladenShare: distance > 0 ? ladenDistance / distance : 0,
+      },
+      operatingHours: hours,
+      rowsUsed: used,
+      rowsSkipped: log.count,
+      errors: log.errors,
+      errorCount: log.count,
+      speedHistogram: { binWidth: SPEED_BIN_WIDTH, seconds: histogram },
+    };
+  }
+
+  return { pushRow, finish };
+}
