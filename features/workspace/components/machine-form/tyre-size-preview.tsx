@@ -1,6 +1,6 @@
 "use client";
 
-import { tyreDimensions } from "@/lib/scrub";
+import { tyreDimensions, type TTyreDimensions } from "@/lib/scrub";
 import { formatQuantity, type TUnitSystem } from "@/features/workspace/lib/units";
 
 /** The sidewall size read back as dimensions while the user types, or what is wrong with it. */
@@ -12,8 +12,15 @@ export function TyreSizePreview({
   system: TUnitSystem;
 }) {
   if (!designation?.trim()) return null;
-  try {
-    const d = tyreDimensions(designation);
+  const parsed = readSize(designation);
+  if ("error" in parsed)
+    return (
+      <p className="text-xs text-danger-700" aria-live="polite">
+        {parsed.error}
+      </p>
+    );
+  const d = parsed.dims;
+  {
     return (
       <p className="text-xs text-ok-700" aria-live="polite">
         Reads as {formatQuantity(system, "length-mm", d.sectionWidth, system === "metric" ? 0 : 1)}{" "}
@@ -24,11 +31,13 @@ export function TyreSizePreview({
         figures below when you have them.
       </p>
     );
+  }
+}
+
+function readSize(designation: string): { dims: TTyreDimensions } | { error: string } {
+  try {
+    return { dims: tyreDimensions(designation) };
   } catch (e) {
-    return (
-      <p className="text-xs text-danger-700" aria-live="polite">
-        {(e as Error).message}
-      </p>
-    );
+    return { error: (e as Error).message };
   }
 }

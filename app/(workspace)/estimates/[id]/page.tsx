@@ -1,0 +1,22 @@
+import { notFound, redirect } from "next/navigation";
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
+import { getActor } from "@/features/auth/server/get-actor";
+import { EstimateResult } from "@/features/workspace/components/estimate-result";
+import { isUuid, prefetch } from "@/features/workspace/server/prefetch";
+import { can } from "@/lib/authz/policy";
+import { makeQueryClient } from "@/lib/query/query-client";
+
+export const metadata = { title: "Estimate" };
+
+export default async function EstimatePage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const actor = await getActor();
+  if (!actor) redirect("/sign-in");
+  const qc = makeQueryClient();
+  if (!isUuid(id) || !(await prefetch.estimate(qc, actor, id))) notFound();
+  return (
+    <HydrationBoundary state={dehydrate(qc)}>
+      <EstimateResult id={id} system={actor.unitSystem} canWrite={can(actor, "estimate:write")} />
+    </HydrationBoundary>
+  );
+}

@@ -1,0 +1,37 @@
+import Link from "next/link";
+import { redirect } from "next/navigation";
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
+import { getActor } from "@/features/auth/server/get-actor";
+import { DEFAULT_LISTS } from "@/features/workspace/api/list-state";
+import { EstimatesTable } from "@/features/workspace/components/estimates-table";
+import { prefetch } from "@/features/workspace/server/prefetch";
+import { can } from "@/lib/authz/policy";
+import { makeQueryClient } from "@/lib/query/query-client";
+
+export const metadata = { title: "Estimates" };
+
+export default async function EstimatesPage() {
+  const actor = await getActor();
+  if (!actor) redirect("/sign-in");
+  const qc = makeQueryClient();
+  await prefetch.estimates(qc, actor, DEFAULT_LISTS.estimates);
+  const canRun = can(actor, "estimate:run");
+  return (
+    <div className="flex flex-col gap-4">
+      <header className="flex flex-wrap items-center justify-between gap-3">
+        <h1 className="text-2xl font-bold text-ink-900">Estimates</h1>
+        {canRun ? (
+          <Link
+            href="/estimates/new"
+            className="inline-flex h-11 items-center rounded-md bg-furrow-600 px-4 font-medium text-white hover:bg-furrow-700"
+          >
+            Run an estimate
+          </Link>
+        ) : null}
+      </header>
+      <HydrationBoundary state={dehydrate(qc)}>
+        <EstimatesTable canRun={canRun} />
+      </HydrationBoundary>
+    </div>
+  );
+}

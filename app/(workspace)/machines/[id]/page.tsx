@@ -1,0 +1,31 @@
+import { notFound, redirect } from "next/navigation";
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
+import { getDb } from "@/db/client";
+import { getActor } from "@/features/auth/server/get-actor";
+import { MachineDetail } from "@/features/workspace/components/machine-detail";
+import { listCustomerChoices } from "@/features/workspace/server/list-customer-choices";
+import { isUuid, prefetch } from "@/features/workspace/server/prefetch";
+import { can } from "@/lib/authz/policy";
+import { makeQueryClient } from "@/lib/query/query-client";
+
+export const metadata = { title: "Machine" };
+
+export default async function MachinePage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const actor = await getActor();
+  if (!actor) redirect("/sign-in");
+  const qc = makeQueryClient();
+  if (!isUuid(id) || !(await prefetch.machine(qc, actor, id))) notFound();
+  const customers = await listCustomerChoices({ db: getDb(), actor });
+  return (
+    <HydrationBoundary state={dehydrate(qc)}>
+      <MachineDetail
+        id={id}
+        customers={customers}
+        system={actor.unitSystem}
+        canWrite={can(actor, "machine:write")}
+        canRun={can(actor, "estimate:run")}
+      />
+    </HydrationBoundary>
+  );
+}
