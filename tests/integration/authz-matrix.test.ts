@@ -1,0 +1,657 @@
+/**
+ * Authorization matrix. Finds every route handler (app/**\/route.ts) and every server-action
+ * file ("use server") on disk, calls each exported verb as: anonymous, each role of a "home"
+ * dealership, and a dealer admin of a rival dealership, and checks that
+ *   - forbidden access is answered 401/403/404 (or, for actions, a refusal), and
+ *   - no response carries data the caller may not see (the other dealership's names and ids;
+ *     for a customer account, other customers' records).
+ * A new route is picked up automatically. When its dynamic params cannot be resolved by the
+ * defaults below, or a server action has no fixture, the test fails and says what to add.
+ */
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+import { readdirSync, readFileSync, statSync } from "node:fs";
+import { join, relative, sep } from "node:path";
+import { pathToFileURL } from "node:url";
+import { eq, inArray } from "drizzle-orm";
+
+const state = vi.hoisted(() => ({ cookie: "" }));
+
+// Server actions read the session through next/headers, which only exists inside a Next
+// request. Stand in for the request scope with the caller's real session cookie; the actor
+// is still resolved from the real database.
+vi.mock("next/headers", () => {
+  const jar = () =>
+    new Map(
+      state.cookie
+        .split(";")
+        .map((p) => p.trim())
+        .filter(Boolean)
+        .map((p) => [p.slice(0, p.indexOf("=")), p.slice(p.indexOf("=") + 1)] as const),
+    );
+  return {
+    cookies: async () => ({
+      get: (name: string) => (jar().has(name) ? { name, value: jar().get(name)! } : undefined),
+      getAll: () => [...jar()].map(([name, value]) => ({ name, value })),
+      has: (name: string) => jar().has(name),
+      set: () => undefined,
+      delete: () => undefined,
+    }),
+    headers: async () => new Headers({ cookie: state.cookie, "x-forwarded-for": "198.51.100.77" }),
+  };
+});
+// Cache revalidation needs Next's render store; outside it, it is a no-op here.
+vi.mock("next/cache", async (importOriginal) => ({
+  ...(await importOriginal<Record<string, unknown>>()),
+  revalidatePath: () => undefined,
+  revalidateTag: () => undefined,
+  updateTag: () => undefined,
+  refresh: () => undefined,
+}));
+
+const { getDb, getPool } = await import("@/db/client");
+const schema = await import("@/db/schema");
+const { createTestDealership, createTestMember, uniqueTag } =
+  await import("@/tests/support/session");
+
+type TRoleName = "dealer_admin" | "estimator" | "billing_admin" | "customer";
+type TCallerName = "anonymous" | TRoleName | "rival";
+const HOME_ROLES: TRoleName[] = ["dealer_admin", "estimator", "billing_admin", "customer"];
+const MUTATING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
+const METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
+const DENIED = [401, 403, 404];
+
+const db = getDb();
+const tag = uniqueTag();
+
+// ── The world: two dealerships, each with customers, sites, machines, duty cycles, estimates ──
+
+type TRecords = {
+  customer: { id: string; name: string };
+  site: { id: string; name: string };
+  machine: { id: string; name: string };
+  dutyCycle: { id: string; name: string };
+  estimate: { id: string; title: string };
+};
+
+async function seedRecords(dealershipId: string, label: string): Promise<TRecords> {
+  const [customer] = await db
+    .insert(schema.customers)
+    .values({
+      dealershipId,
+      name: `${label} Customer ${tag}`,
+      contactName: `${label} Contact ${tag}`,
+    })
+    .returning();
+  const [site] = await db
+    .insert(schema.sites)
+    .values({
+      dealershipId,
+      customerId: customer!.id,
+      name: `${label} Site ${tag}`,
+      surfaceMix: { grass: 1 },
+    })
+    .returning();
+  const [machine] = await db
+    .insert(schema.machines)
+    .values({
+      dealershipId,
+      customerId: customer!.id,
+      name: `${label} Machine ${tag}`,
+      kind: "tractor",
+      spec: {},
+    })
+    .returning();
+  const [dutyCycle] = await db
+    .insert(schema.dutyCycles)
+    .values({
+      dealershipId,
+      customerId: customer!.id,
+      machineId: machine!.id,
+      name: `${label} Duty ${tag}`,
+      source: "builder",
+      status: "ready",
+    })
+    .returning();
+  const [estimate] = await db
+    .insert(schema.estimates)
+    .values({
+      dealershipId,
+      customerId: customer!.id,
+      machineId: machine!.id,
+      dutyCycleId: dutyCycle!.id,
+      title: `${label} Estimate ${tag}`,
+      machineVersion: 1,
+      engineVersion: "0.0.0",
+      inputs: {},
+      // The shape of the engine's result, empty: enough for lists, detail and CSV export.
+      result: {
+        engineVersion: "0.0.0",
+        machineName: machine!.name,
+        dutyCycleName: dutyCycle!.name,
+        lead: null,
+        positions: [],
+        turns: [],
+        firstToWear: null,
+        rotation: [],
+        costPerHour: 0,
+        warnings: [],
+        cautions: [],
+        coefficients: {},
+      },
+    })
+    .returning();
+  return {
+    customer: { id: customer!.id, name: customer!.name },
+    site: { id: site!.id, name: site!.name },
+    machine: { id: machine!.id, name: machine!.name },
+    dutyCycle: { id: dutyCycle!.id, name: dutyCycle!.name },
+    estimate: { id: estimate!.id, title: estimate!.title },
+  };
+}
+
+function markersOf(r: TRecords): string[] {
+  return [
+    r.customer.id,
+    r.customer.name,
+    r.site.id,
+    r.site.name,
+    r.machine.id,
+    r.machine.name,
+    r.dutyCycle.id,
+    r.dutyCycle.name,
+    r.estimate.id,
+    r.estimate.title,
+  ];
+}
+
+type TMember = Awaited<ReturnType<typeof createTestMember>>;
+type TWorld = {
+  home: {
+    dealershipId: string;
+    dealershipName: string;
+    own: TRecords;
+    other: TRecords;
+    templateId: string;
+    templateName: string;
+    invitationId: string;
+  };
+  rival: { dealershipId: string; dealershipName: string; records: TRecords };
+  members: Record<TRoleName | "rival", TMember>;
+};
+
+let world: TWorld;
+
+async function seedWorld(): Promise<TWorld> {
+  const home = await createTestDealership(db, `Home Dealership ${tag}`);
+  const rival = await createTestDealership(db, `Rival Dealership ${tag}`);
+  const own = await seedRecords(home.id, "HomeOwn");
+  const other = await seedRecords(home.id, "HomeOther");
+  const rivalRecords = await seedRecords(rival.id, "Rival");
+  const [template] = await db
+    .insert(schema.mappingTemplates)
+    .values({
+      dealershipId: home.id,
+      name: `Home Template ${tag}`,
+      kind: "telematics",
+      mapping: {},
+    })
+    .returning();
+  const members = {} as TWorld["members"];
+  for (const role of HOME_ROLES) {
+    members[role] = await createTestMember({
+      db,
+      roles: [role],
+      dealershipId: home.id,
+      customerId: role === "customer" ? own.customer.id : undefined,
+      name: `Home ${role} ${tag}`,
+    });
+  }
+  members.rival = await createTestMember({
+    db,
+    roles: ["dealer_admin"],
+    dealershipId: rival.id,
+    name: `Rival Admin ${tag}`,
+  });
+  const [invitation] = await db
+    .insert(schema.invitations)
+    .values({
+      dealershipId: home.id,
+      email: `pending-${tag}@example.test`,
+      role: "estimator",
+      tokenHash: `matrix-${tag}`,
+      expiresAt: new Date(Date.now() + 86_400_000),
+    })
+    .returning();
+  return {
+    home: {
+      dealershipId: home.id,
+      dealershipName: home.name,
+      own,
+      other,
+      templateId: template!.id,
+      templateName: template!.name,
+      invitationId: invitation!.id,
+    },
+    rival: { dealershipId: rival.id, dealershipName: rival.name, records: rivalRecords },
+    members,
+  };
+}
+
+/** Strings a caller must never see in any answer. */
+function forbiddenMarkers(caller: TCallerName): string[] {
+  const w = world;
+  const rival = [
+    w.rival.dealershipId,
+    w.rival.dealershipName,
+    w.members.rival.user.email,
+    w.members.rival.user.name ?? "",
+    ...markersOf(w.rival.records),
+  ];
+  const home = [
+    w.home.dealershipId,
+    w.home.dealershipName,
+    w.home.templateName,
+    ...markersOf(w.home.own),
+    ...markersOf(w.home.other),
+    ...HOME_ROLES.map((r) => w.members[r].user.email),
+  ];
+  if (caller === "anonymous") return [...home, ...rival];
+  if (caller === "rival") return home;
+  if (caller === "customer") return [...rival, ...markersOf(w.home.other), w.home.templateName];
+  return rival;
+}
+
+// ── Routes ──────────────────────────────────────────────────────────────────────────────
+
+type TRouteFixture = {
+  /** Public by design (health, Auth.js endpoints): not checked for 401. */
+  public?: true;
+  /** Values for the dynamic segments; defaults cover `[id]` after a known collection. */
+  params?: (w: TWorld) => Record<string, string | string[]>;
+  query?: string;
+  /** JSON bodies per method, valid enough that a refusal cannot hide behind a 400. */
+  body?: (w: TWorld) => Partial<Record<(typeof METHODS)[number], unknown>>;
+  /** Roles allowed to change things through this route, when not the usual staff writers. */
+  writers?: TRoleName[];
+};
+
+/** Per-route fixtures, keyed by the route's path pattern. */
+const ROUTE_FIXTURES: Record<string, TRouteFixture> = {
+  "/api/health": { public: true },
+  "/api/auth/[...nextauth]": { public: true, params: () => ({ nextauth: ["session"] }) },
+  "/api/v1/sites": {
+    body: (w) => ({
+      POST: { customerId: w.home.own.customer.id, name: `Matrix Site`, surfaceMix: { grass: 1 } },
+    }),
+  },
+  "/api/v1/machines/[id]/copy": {
+    body: (w) => ({ POST: { customerId: w.home.own.customer.id } }),
+  },
+};
+
+/** Which record a `[id]` after each collection names: always the home dealership's "other" customer's. */
+const COLLECTION_IDS: Record<string, (w: TWorld) => string> = {
+  customers: (w) => w.home.other.customer.id,
+  sites: (w) => w.home.other.site.id,
+  machines: (w) => w.home.other.machine.id,
+  "duty-cycles": (w) => w.home.other.dutyCycle.id,
+  estimates: (w) => w.home.other.estimate.id,
+  "mapping-templates": (w) => w.home.templateId,
+  invitations: (w) => w.home.invitationId,
+};
+const NAMED_IDS: Record<string, (w: TWorld) => string> = {
+  customerId: (w) => w.home.other.customer.id,
+  siteId: (w) => w.home.other.site.id,
+  machineId: (w) => w.home.other.machine.id,
+  dutyCycleId: (w) => w.home.other.dutyCycle.id,
+  estimateId: (w) => w.home.other.estimate.id,
+  templateId: (w) => w.home.templateId,
+};
+
+type TRoute = { file: string; pattern: string; segments: string[] };
+
+function walk(dir: string, out: string[] = []): string[] {
+  for (const name of readdirSync(dir)) {
+    const full = join(dir, name);
+    if (statSync(full).isDirectory()) walk(full, out);
+    else out.push(full);
+  }
+  return out;
+}
+
+const root = process.cwd();
+const routes: TRoute[] = walk(join(root, "app"))
+  .filter((f) => /[\\/]route\.(ts|tsx|js)$/.test(f))
+  .map((file) => {
+    const segments = relative(join(root, "app"), file)
+      .split(sep)
+      .slice(0, -1)
+      .filter((s) => !(s.startsWith("(") && s.endsWith(")")) && !s.startsWith("@"));
+    return { file, pattern: `/${segments.join("/")}`, segments };
+  })
+  .sort((a, b) => a.pattern.localeCompare(b.pattern));
+
+function resolveParams(route: TRoute): {
+  params: Record<string, string | string[]>;
+  missing: string[];
+} {
+  const fixture = ROUTE_FIXTURES[route.pattern];
+  if (fixture?.params) return { params: fixture.params(world), missing: [] };
+  const params: Record<string, string | string[]> = {};
+  const missing: string[] = [];
+  route.segments.forEach((seg, i) => {
+    const m = /^\[(\.\.\.)?(.+)\]$/.exec(seg);
+    if (!m) return;
+    const name = m[2]!;
+    const byName = NAMED_IDS[name];
+    const byCollection = name === "id" ? COLLECTION_IDS[route.segments[i - 1] ?? ""] : undefined;
+    const resolver = byName ?? byCollection;
+    if (!resolver) missing.push(name);
+    else params[name] = m[1] ? [resolver(world)] : resolver(world);
+  });
+  return { params, missing };
+}
+
+function urlFor(route: TRoute, params: Record<string, string | string[]>, method: string): string {
+  const path = route.segments
+    .map((seg) => {
+      const m = /^\[(?:\.\.\.)?(.+)\]$/.exec(seg);
+      if (!m) return seg;
+      const v = params[m[1]!];
+      return Array.isArray(v) ? v.join("/") : v;
+    })
+    .join("/");
+  const fixtureQuery = ROUTE_FIXTURES[route.pattern]?.query;
+  const query = fixtureQuery ?? (method === "DELETE" ? "confirm=true" : "");
+  return `http://localhost:3000/${path}${query ? `?${query}` : ""}`;
+}
+
+function cookieOf(caller: TCallerName): string {
+  return caller === "anonymous" ? "" : world.members[caller].cookie;
+}
+
+type TOutcome = { status: number; body: string };
+
+async function callRoute(
+  route: TRoute,
+  handler: (req: Request, ctx: unknown) => Promise<Response>,
+  method: string,
+  caller: TCallerName,
+): Promise<TOutcome> {
+  const { params } = resolveParams(route);
+  const fixtureBody =
+    ROUTE_FIXTURES[route.pattern]?.body?.(world)[method as (typeof METHODS)[number]];
+  const headers: Record<string, string> = { "x-forwarded-for": "198.51.100.77" };
+  const cookie = cookieOf(caller);
+  if (cookie) headers.cookie = cookie;
+  let body: string | undefined;
+  if (MUTATING.has(method)) {
+    headers["content-type"] = "application/json";
+    body = JSON.stringify(fixtureBody ?? {});
+  }
+  const { NextRequest } = await import("next/server");
+  const req = new NextRequest(urlFor(route, params, method), { method, headers, body });
+  try {
+    const res = await handler(req, { params: Promise.resolve(params) });
+    return { status: res.status, body: await res.text() };
+  } catch (error) {
+    // Next answers an uncaught error with a 500; report it with its message.
+    return { status: 500, body: `threw: ${String(error)}` };
+  }
+}
+
+/** What each caller must get from a route and method: a refusal, or anything that does not leak. */
+function mustBeDenied(route: TRoute, method: string, caller: TCallerName): boolean {
+  const fixture = ROUTE_FIXTURES[route.pattern];
+  if (fixture?.public) return false;
+  if (caller === "anonymous") return true;
+  const dynamic = route.segments.some((s) => s.startsWith("["));
+  // The params always name the home dealership's records, of a customer other than the
+  // customer account's own.
+  if (caller === "rival" || caller === "customer") {
+    if (dynamic) return true;
+  }
+  if (MUTATING.has(method)) {
+    // On its own dealership's collections the rival is a dealer admin like any other.
+    const role: TRoleName = caller === "rival" ? "dealer_admin" : caller;
+    const writers = fixture?.writers ?? ["dealer_admin", "estimator"];
+    return !writers.includes(role);
+  }
+  return false;
+}
+
+// ── Server actions ──────────────────────────────────────────────────────────────────────
+
+type TActionFixture =
+  | { public: true }
+  | {
+      args: (w: TWorld) => unknown[];
+      /** Roles of the home dealership allowed to run it; everyone else must be refused. */
+      allowed: TRoleName[];
+      /** The action only touches the caller's own account, so the rival may run it too. */
+      selfOnly?: true;
+    };
+
+function form(values: Record<string, string | string[]>): FormData {
+  const f = new FormData();
+  for (const [k, v] of Object.entries(values)) {
+    for (const item of Array.isArray(v) ? v : [v]) f.append(k, item);
+  }
+  return f;
+}
+
+/** Per-action fixtures, keyed "<file relative to the project>#<export>". */
+const ACTION_FIXTURES: Record<string, TActionFixture> = {
+  "features/auth/server/actions/sign-in-actions.ts#signInWithPasswordAction": { public: true },
+  "features/auth/server/actions/sign-in-actions.ts#requestMagicLinkAction": { public: true },
+  "features/auth/server/actions/sign-in-actions.ts#requestPasswordResetAction": { public: true },
+  "features/auth/server/actions/reset-password-actions.ts#resetPasswordAction": { public: true },
+  "features/auth/server/actions/invite-actions.ts#acceptInvitationAction": { public: true },
+  "features/auth/server/actions/session-actions.ts#signOutAction": { public: true },
+  "features/auth/server/actions/session-actions.ts#switchDealershipAction": {
+    args: (w) => [undefined, form({ dealershipId: w.home.dealershipId })],
+    allowed: HOME_ROLES,
+  },
+  "features/auth/server/actions/session-actions.ts#setUnitSystemAction": {
+    args: () => [undefined, form({ unitSystem: "imperial" })],
+    allowed: HOME_ROLES,
+    selfOnly: true,
+  },
+  "features/auth/server/actions/team-actions.ts#inviteMemberAction": {
+    args: (w) => [
+      undefined,
+      form({
+        email: `matrix-invite-${uniqueTag()}@example.test`,
+        role: "customer",
+        customerId: w.home.other.customer.id,
+      }),
+    ],
+    allowed: ["dealer_admin"],
+  },
+  "features/auth/server/actions/team-actions.ts#revokeInvitationAction": {
+    args: (w) => [undefined, form({ invitationId: w.home.invitationId })],
+    allowed: ["dealer_admin"],
+  },
+  "features/auth/server/actions/team-actions.ts#setMemberRolesAction": {
+    args: (w) => [
+      undefined,
+      form({ userId: w.members.estimator.user.id, roles: ["dealer_admin", "estimator"] }),
+    ],
+    allowed: ["dealer_admin"],
+  },
+  "features/auth/server/actions/team-actions.ts#removeMemberAction": {
+    args: (w) => [undefined, form({ userId: w.members.estimator.user.id })],
+    allowed: ["dealer_admin"],
+  },
+};
+
+const actionFiles = [...walk(join(root, "app")), ...walk(join(root, "features"))]
+  .filter((f) => /\.(ts|tsx)$/.test(f) && !/\.test\.tsx?$/.test(f))
+  .filter((f) =>
+    /^\s*(\/\/[^\n]*\n\s*|\/\*[\s\S]*?\*\/\s*)*["']use server["']/.test(readFileSync(f, "utf8")),
+  )
+  .map((f) => relative(root, f).split(sep).join("/"))
+  .sort();
+
+type TActionOutcome = { refused: boolean; text: string };
+
+/** Runs an action as a caller; a refusal is a thrown error or a result with ok=false / error. */
+async function callAction(
+  fn: (...args: unknown[]) => unknown,
+  args: unknown[],
+  caller: TCallerName,
+) {
+  state.cookie = cookieOf(caller);
+  try {
+    const result = await fn(...args);
+    const text = JSON.stringify(result ?? null);
+    const r = result as { ok?: unknown; error?: unknown } | null | undefined;
+    return { refused: Boolean(r && (r.ok === false || r.error)), text } satisfies TActionOutcome;
+  } catch (error) {
+    const digest = String((error as { digest?: unknown })?.digest ?? "");
+    const text = `${String(error)} ${digest}`;
+    // A redirect counts as a refusal only when it sends the caller to sign in.
+    if (digest.startsWith("NEXT_REDIRECT")) return { refused: digest.includes("/sign-in"), text };
+    return { refused: true, text };
+  } finally {
+    state.cookie = "";
+  }
+}
+
+function leaks(text: string, caller: TCallerName): string[] {
+  return forbiddenMarkers(caller).filter((m) => m && text.includes(m));
+}
+
+// ── The tests ──────────────────────────────────────────────────────────────────────────
+
+beforeAll(async () => {
+  world = await seedWorld();
+});
+afterAll(async () => {
+  await getPool().end();
+});
+
+describe("authorization matrix: route handlers", () => {
+  it("finds the route handlers on disk", () => {
+    expect(routes.length).toBeGreaterThan(2);
+    expect(routes.map((r) => r.pattern)).toContain("/api/health");
+  });
+
+  it.each(routes.map((r) => [r.pattern, r] as const))("%s", async (_pattern, route) => {
+    const { missing } = resolveParams(route);
+    expect(
+      missing,
+      `Route ${route.pattern} has dynamic params the matrix cannot fill (${missing.join(", ")}). ` +
+        `Add "${route.pattern}": { params: (w) => ({ ... }) } to ROUTE_FIXTURES in tests/integration/authz-matrix.test.ts.`,
+    ).toEqual([]);
+    const mod = (await import(pathToFileURL(route.file).href)) as Record<string, unknown>;
+    // Public routes are only read, to check they reveal nothing about other dealerships.
+    const isPublic = ROUTE_FIXTURES[route.pattern]?.public;
+    const methods = METHODS.filter(
+      (m) => typeof mod[m] === "function" && (!isPublic || m === "GET"),
+    );
+    expect(methods.length, `${route.pattern} exports no HTTP method`).toBeGreaterThan(0);
+    const callers: TCallerName[] = [
+      "anonymous",
+      "rival",
+      "customer",
+      "billing_admin",
+      "estimator",
+      "dealer_admin",
+    ];
+    const problems: string[] = [];
+    for (const method of methods) {
+      const handler = mod[method] as (req: Request, ctx: unknown) => Promise<Response>;
+      for (const caller of callers) {
+        const denied = mustBeDenied(route, method, caller);
+        // Allowed writes are not exercised: this test proves refusals and the absence of leaks.
+        if (!denied && MUTATING.has(method)) continue;
+        const out = await callRoute(route, handler, method, caller);
+        if (denied && !DENIED.includes(out.status)) {
+          const hint =
+            out.status === 400 || out.status === 422
+              ? " (the input was checked before authorization: check the role first, or give a valid body in ROUTE_FIXTURES)"
+              : "";
+          problems.push(`${method} as ${caller}: expected 401/403/404, got ${out.status}${hint}`);
+        }
+        if (caller === "anonymous" && denied && out.status !== 401 && out.status !== 404) {
+          problems.push(`${method} as anonymous: expected 401, got ${out.status}`);
+        }
+        const leaked = leaks(out.body, caller);
+        if (leaked.length)
+          problems.push(`${method} as ${caller} (${out.status}) leaked: ${leaked.join(", ")}`);
+        if (out.status >= 500)
+          problems.push(
+            `${method} as ${caller}: server error ${out.status}: ${out.body.slice(0, 200)}`,
+          );
+      }
+    }
+    expect(problems).toEqual([]);
+  });
+});
+
+describe("authorization matrix: server actions", () => {
+  it("finds the server-action files on disk", () => {
+    expect(actionFiles).toContain("features/auth/server/actions/team-actions.ts");
+  });
+
+  it.each(actionFiles.map((f) => [f] as const))("%s", async (file) => {
+    const mod = (await import(pathToFileURL(join(root, file)).href)) as Record<string, unknown>;
+    const problems: string[] = [];
+    for (const [name, value] of Object.entries(mod)) {
+      if (typeof value !== "function") continue;
+      const fn = value as (...args: unknown[]) => unknown;
+      const key = `${file}#${name}`;
+      const fixture = ACTION_FIXTURES[key];
+      if (fixture && "public" in fixture) continue;
+      // Anonymous callers are refused whatever the arguments.
+      const anon = await callAction(
+        fn,
+        fixture ? fixture.args(world) : [undefined, new FormData()],
+        "anonymous",
+      );
+      if (!anon.refused)
+        problems.push(`${name} as anonymous: not refused (${anon.text.slice(0, 120)})`);
+      if (leaks(anon.text, "anonymous").length) problems.push(`${name} as anonymous leaked data`);
+      if (!fixture) {
+        problems.push(
+          `${name}: no fixture. Add "${key}": { args: (w) => [...], allowed: [roles] } (or { public: true }) to ACTION_FIXTURES in tests/integration/authz-matrix.test.ts.`,
+        );
+        continue;
+      }
+      const callers: TCallerName[] = [...HOME_ROLES.filter((r) => !fixture.allowed.includes(r))];
+      if (!fixture.selfOnly) callers.push("rival");
+      for (const caller of callers) {
+        const out = await callAction(fn, fixture.args(world), caller);
+        if (!out.refused)
+          problems.push(`${name} as ${caller}: not refused (${out.text.slice(0, 120)})`);
+        const leaked = leaks(out.text, caller);
+        if (leaked.length) problems.push(`${name} as ${caller} leaked: ${leaked.join(", ")}`);
+      }
+    }
+    expect(problems).toEqual([]);
+  });
+
+  it("refused calls changed nothing: the home dealership's records, roles and invitation are intact", async () => {
+    const w = world;
+    const ids = [w.home.own, w.home.other].map((r) => r.customer.id);
+    expect(
+      await db.select().from(schema.customers).where(inArray(schema.customers.id, ids)),
+    ).toHaveLength(2);
+    const est = await db
+      .select()
+      .from(schema.estimates)
+      .where(eq(schema.estimates.id, w.home.other.estimate.id));
+    expect(est).toHaveLength(1);
+    const roles = await db
+      .select({ role: schema.memberships.role })
+      .from(schema.memberships)
+      .where(eq(schema.memberships.userId, w.members.estimator.user.id));
+    expect(roles.map((r) => r.role)).toEqual(["estimator"]);
+    const [inv] = await db
+      .select()
+      .from(schema.invitations)
+      .where(eq(schema.invitations.id, w.home.invitationId));
+    expect(inv?.revokedAt).toBeNull();
+  });
+});
