@@ -63,7 +63,7 @@ export function equilibriumTurn({
   wheels.forEach((wheel, i) => {
     w.x[i] = wheel.x;
     w.y[i] = wheel.y;
-    w.steer[i] = toRadians(wheel.steer);
+    w.setSteer(i, toRadians(wheel.steer));
     w.load[i] = wheel.load;
     w.stiffness[i] = wheel.corneringStiffness;
     w.friction[i] = wheel.friction;

@@ -47,6 +47,9 @@ import { resolveSurfaces, SURFACE_KINDS } from "./surfaces";
 import { ENGINE_VERSION } from "./version";
 import { solveWindUp } from "./wind-up";
 
+const CACHE_LIMIT = 4096;
+const NO_WHEELS: TWheelTurnResult[] = [];
+Object.freeze(NO_WHEELS);
 const POSITIONS: readonly TPosition[] = ["front-left", "front-right", "rear-left", "rear-right"];
 const SURFACE_INDEX = new Map(SURFACE_KINDS.map((s, i) => [s, i]));
 const S = SURFACE_KINDS.length;
@@ -123,19 +126,18 @@ export function estimate(
     return c;
   };
 
-  const cache = new Map<string, UnitTurn | null>();
+  const cache = new TurnCache();
   const turns: TTurnResult[] = new Array(dutyCycle.turns.length);
   dutyCycle.turns.forEach((kind, index) => {
     const turn = kind.turn;
     const layout = turn.steeringMode ?? pm.defaultLayout;
-    const key = turnKey(layout, turn);
-    let unit = cache.get(key);
+    let unit = cache.get(layout, turn);
     if (unit === undefined) {
       const mode = pm.modes.get(layout);
       unit = mode ? solveUnitTurn(pm, mode, turn, contextFor(turn.surface)) : null;
-      cache.set(key, unit);
+      cache.set(layout, turn, unit);
     }
-    const label = turn.label ?? defaultLabel(turn);
+    const label = turn.label ?? `Turn ${index + 1} (${turn.direction})`;
     if (unit === null) {
       warnings.push({
         code: "steering-mode-missing",
@@ -230,13 +232,40 @@ function isTracked(pm: PreparedMachine): boolean {
   return pm.machine.steering.layout === "skid" && pm.machine.steering.running === "tracked";
 }
 
-function turnKey(layout: string, t: TTurn): string {
-  return `${layout}|${t.direction}|${t.radius ?? ""}|${t.steerInput ?? ""}|${t.speed}|${t.surface}|${t.loadState}|${t.frontDrive}|${t.differentialLock ? 1 : 0}`;
-}
+/**
+ * Solved turns keyed by everything that changes the solve (not heading change, count, crab
+ * distance or label: results scale linearly with those). Numbers stay numbers (no string
+ * conversion); bounded, since a miss only re-solves deterministically to the same result.
+ */
+class TurnCache {
+  private byKind = new Map<string, Map<number, Map<number, UnitTurn | null>>>();
+  private size = 0;
 
-function defaultLabel(t: TTurn): string {
-  const size = t.radius !== undefined ? `${t.radius} m radius` : `${t.steerInput}° steer`;
-  return `${t.direction} ${size}, ${t.headingChange}°`;
+  private kind(layout: string, t: TTurn): string {
+    return `${layout}|${t.direction}|${t.radius === undefined ? "s" : "r"}|${t.surface}|${t.loadState}|${t.frontDrive}|${t.differentialLock ? 1 : 0}`;
+  }
+
+  get(layout: string, t: TTurn): UnitTurn | null | undefined {
+    return this.byKind
+      .get(this.kind(layout, t))
+      ?.get(t.radius ?? t.steerInput ?? 0)
+      ?.get(t.speed);
+  }
+
+  set(layout: string, t: TTurn, unit: UnitTurn | null): void {
+    if (this.size >= CACHE_LIMIT) {
+      this.byKind.clear();
+      this.size = 0;
+    }
+    const k = this.kind(layout, t);
+    let bySize = this.byKind.get(k);
+    if (!bySize) this.byKind.set(k, (bySize = new Map()));
+    const size = t.radius ?? t.steerInput ?? 0;
+    let bySpeed = bySize.get(size);
+    if (!bySpeed) bySize.set(size, (bySpeed = new Map()));
+    bySpeed.set(t.speed, unit);
+    this.size++;
+  }
 }
 
 function emptyTurn(
@@ -258,7 +287,7 @@ function emptyTurn(
     lateralAcceleration: 0,
     effectiveLead: null,
     turningMoment: null,
-    wheels: [],
+    wheels: NO_WHEELS,
     energy: 0,
   };
 }
@@ -277,7 +306,7 @@ function turnResult(
 ): TTurnResult {
   const wv = unit.wheels;
   let energy = 0;
-  const wheels: TWheelTurnResult[] = [];
+  const wheels: TWheelTurnResult[] = detail && unit.feasible ? [] : NO_WHEELS;
   for (let i = 0; i < 4; i++) {
     const o = i * FIELDS;
     const lateralEnergy = wv[o + F_LAT_ENERGY]! * amount;

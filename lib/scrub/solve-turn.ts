@@ -14,7 +14,10 @@ import {
 } from "./turn-solver";
 import { solveWindUp, type WindUp } from "./wind-up";
 
-/** Per-wheel fields of a unit turn result, 4 wheels × FIELDS in one Float64Array. */
+/**
+ * Per-wheel fields of a unit turn result, 4 wheels × FIELDS in one plain number array (small
+ * typed arrays are allocated off-heap in V8 and are slow to create by the million).
+ */
 export const F_STEER = 0; // deg
 export const F_SLIP = 1; // deg
 export const F_PATH = 2; // m, NaN in crab
@@ -43,7 +46,7 @@ export interface UnitTurn {
   effectiveLead: number | null;
   turningMoment: number | null;
   converged: boolean;
-  wheels: Float64Array;
+  wheels: number[];
 }
 
 /** What a turn solve needs besides the machine. */
@@ -55,7 +58,14 @@ export interface TurnContext {
 }
 
 const MIRROR = [1, 0, 3, 2] as const;
-const state: SolveState = newSolveState();
+
+function newWheelFields(): number[] {
+  const out = new Array<number>(4 * FIELDS);
+  for (let i = 0; i < out.length; i++) out[i] = 0.5;
+  for (let i = 0; i < out.length; i++) out[i] = 0;
+  return out;
+}
+export const state: SolveState = newSolveState();
 const windUp: WindUp = { frontSlip: 0, rearSlip: 0, force: 0 };
 const icr = { x: 0, y: 0 };
 const loadsN = new Float64Array(4);
@@ -80,7 +90,7 @@ function infeasible(
     effectiveLead: null,
     turningMoment: null,
     converged: true,
-    wheels: new Float64Array(4 * FIELDS),
+    wheels: newWheelFields(),
   };
 }
 
@@ -115,7 +125,7 @@ export function solveUnitTurn(
     w.friction[i] = mu;
     w.stiffness[i] =
       load * (tracked ? TRACK_STIFFNESS_COEFFICIENT : axle.corneringStiffnessCoefficient);
-    w.steer[i] = 0;
+    w.setSteer(i, 0);
     w.steerSlope[i] = 0;
     w.x[i] = mode.pivots.px[i] as number;
     w.y[i] = mode.pivots.py[i] as number;
@@ -188,7 +198,7 @@ export function solveUnitTurn(
       state.v = -icr.x * state.r;
     }
     solveFixedSteer(w, u, mass, xcg, state);
-    radius = Math.hypot(u, state.v) / Math.abs(state.r);
+    radius = Math.sqrt(u * u + state.v * state.v) / Math.abs(state.r);
   }
   const result = collect(pm, mode, turn, ctx, mirrored, 1 / Math.abs(state.r), "radian");
   result.radius = radius;
@@ -231,14 +241,14 @@ function collect(
   perUnit: "radian" | "metre",
 ): UnitTurn {
   const w = mode.wheels;
-  const out = new Float64Array(4 * FIELDS);
+  const out = newWheelFields();
   let maxPath = 0;
   for (let i = 0; i < 4; i++) {
-    const o = (mirrored ? MIRROR[i]! : i) * FIELDS;
+    const o = slot(i, mirrored);
     const sign = mirrored ? -1 : 1;
     const lateral = Math.abs(w.lateralSpeed[i] as number) * unit;
     const rolling = Math.abs(w.rollingSpeed[i] as number) * unit;
-    const path = perUnit === "radian" ? Math.hypot(lateral, rolling) : NaN;
+    const path = perUnit === "radian" ? Math.sqrt(lateral * lateral + rolling * rolling) : NaN;
     if (path > maxPath) maxPath = path;
     out[o + F_STEER] = sign * toDegrees(w.steer[i] as number);
     out[o + F_SLIP] = sign * toDegrees(Math.atan(w.sigma[i] as number));
@@ -266,12 +276,21 @@ function collect(
   return result;
 }
 
-/** Driven axles in this turn: [front, rear]. */
-function drivenAxles(pm: PreparedMachine, turn: TTurn): [boolean, boolean] {
+function frontDriven(pm: PreparedMachine, turn: TTurn): boolean {
   const drive = pm.machine.drive;
-  if (drive.type === "2wd") return [drive.drivenAxle === "front", drive.drivenAxle === "rear"];
-  if (drive.type === "front-assist") return [turn.frontDrive === "engaged", true];
-  return [true, true];
+  if (drive.type === "2wd") return drive.drivenAxle === "front";
+  if (drive.type === "front-assist") return turn.frontDrive === "engaged";
+  return true;
+}
+
+function rearDriven(pm: PreparedMachine): boolean {
+  const drive = pm.machine.drive;
+  return drive.type !== "2wd" || drive.drivenAxle === "rear";
+}
+
+/** Offset of wheel i (solved, left-turn order) in the result array (actual position order). */
+function slot(i: number, mirrored: boolean): number {
+  return (mirrored ? (MIRROR[i] as number) : i) * FIELDS;
 }
 
 function addLongitudinal(
@@ -284,13 +303,13 @@ function addLongitudinal(
   if (result.layout === "skid") return;
   const out = result.wheels;
   const w = pm.modes.get(result.layout)!.wheels;
-  const [frontDriven, rearDriven] = drivenAxles(pm, turn);
+  const front = frontDriven(pm, turn);
+  const rear = rearDriven(pm);
   const cx = ctx.longitudinalStiffnessCoefficient;
-  const at = (i: number): number => (mirrored ? MIRROR[i]! : i) * FIELDS;
   // Coupled axles: wind-up from the mismatch between lead and the required speed ratio.
-  if (frontDriven && rearDriven && ctx.lead !== null) {
-    const frontPath = out[at(0) + F_DISTANCE]! + out[at(1) + F_DISTANCE]!;
-    const rearPath = out[at(2) + F_DISTANCE]! + out[at(3) + F_DISTANCE]!;
+  if (front && rear && ctx.lead !== null) {
+    const frontPath = out[slot(0, mirrored) + F_DISTANCE]! + out[slot(1, mirrored) + F_DISTANCE]!;
+    const rearPath = out[slot(2, mirrored) + F_DISTANCE]! + out[slot(3, mirrored) + F_DISTANCE]!;
     const required = frontPath / rearPath;
     const mismatch = (1 + ctx.lead) / required - 1;
     result.effectiveLead = mismatch;
@@ -299,7 +318,7 @@ function addLongitudinal(
     const mu = ctx.surface.friction;
     solveWindUp(mismatch, cx * nFront, cx * nRear, mu * nFront, mu * nRear, windUp);
     for (let i = 0; i < 4; i++) {
-      const o = at(i);
+      const o = slot(i, mirrored);
       const slip = i < 2 ? windUp.frontSlip : windUp.rearSlip;
       const scrub = slip * out[o + F_DISTANCE]!;
       out[o + F_LON_SCRUB] = out[o + F_LON_SCRUB]! + scrub;
@@ -308,26 +327,37 @@ function addLongitudinal(
   }
   // Locked differentials: both wheels of a driven axle turn at the axle's mean speed.
   if (turn.differentialLock) {
-    for (const [axleDriven, a, b] of [
-      [frontDriven, 0, 1],
-      [rearDriven, 2, 3],
-    ] as const) {
-      if (!axleDriven) continue;
-      const da = out[at(a) + F_DISTANCE]!;
-      const db = out[at(b) + F_DISTANCE]!;
-      const mean = (da + db) / 2;
-      for (const i of [a, b]) {
-        const o = at(i);
-        const d = out[o + F_DISTANCE]!;
-        if (!(d > 0)) continue;
-        const kappa = Math.abs(mean - d) / d;
-        const load = w.load[i] as number;
-        const force = Math.min(cx * load * kappa, ctx.surface.friction * load);
-        const scrub = kappa * d;
-        out[o + F_LON_SCRUB] = out[o + F_LON_SCRUB]! + scrub;
-        out[o + F_LON_ENERGY] = out[o + F_LON_ENERGY]! + force * scrub;
-      }
-    }
+    if (front) lockAxle(w, out, 0, 1, mirrored, ctx);
+    if (rear) lockAxle(w, out, 2, 3, mirrored, ctx);
+  }
+}
+
+/**
+ * Locked differential [C]: each wheel runs at slip κ = |d̄ − d|/d against its own path d;
+ * force min(C_x κ, μN), energy F·κ·d.
+ */
+function lockAxle(
+  w: PreparedMode["wheels"],
+  out: number[],
+  a: number,
+  b: number,
+  mirrored: boolean,
+  ctx: TurnContext,
+): void {
+  const mean = (out[slot(a, mirrored) + F_DISTANCE]! + out[slot(b, mirrored) + F_DISTANCE]!) / 2;
+  for (let i = a; i <= b; i++) {
+    const o = slot(i, mirrored);
+    const d = out[o + F_DISTANCE]!;
+    if (!(d > 0)) continue;
+    const kappa = Math.abs(mean - d) / d;
+    const load = w.load[i] as number;
+    const force = Math.min(
+      ctx.longitudinalStiffnessCoefficient * load * kappa,
+      ctx.surface.friction * load,
+    );
+    const scrub = kappa * d;
+    out[o + F_LON_SCRUB] = out[o + F_LON_SCRUB]! + scrub;
+    out[o + F_LON_ENERGY] = out[o + F_LON_ENERGY]! + force * scrub;
   }
 }
 
@@ -384,7 +414,7 @@ function articulatedTurn(
     const sigma = force / (w.stiffness[i] as number);
     w.sigma[i] = sigma;
     w.force[i] = force;
-    w.steer[i] = i < 2 ? gamma : 0;
+    w.setSteer(i, i < 2 ? gamma : 0);
     w.rollingSpeed[i] = rho / Math.sqrt(1 + sigma * sigma);
     w.lateralSpeed[i] = (rho * sigma) / Math.sqrt(1 + sigma * sigma);
   }
@@ -428,14 +458,14 @@ function crabTurn(
   const ackermann = mode.steering.wheelAngles === "ackermann";
   const frontK = pm.front.pivotTrack / pm.wheelbase;
   const rearK = pm.rear.pivotTrack / pm.wheelbase;
-  w.steer[0] = p;
-  w.steer[1] = ackermann ? ackermannOuterRad(p, frontK) : p;
-  w.steer[2] = p;
-  w.steer[3] = ackermann ? ackermannOuterRad(p, rearK) : p;
+  w.setSteer(0, p);
+  w.setSteer(1, ackermann ? ackermannOuterRad(p, frontK) : p);
+  w.setSteer(2, p);
+  w.setSteer(3, ackermann ? ackermannOuterRad(p, rearK) : p);
   for (let i = 0; i < 4; i++) {
     const outward = i % 2 === 0 ? 1 : -1;
     const rs = mode.pivots.scrubRadius[i] as number;
-    const d = w.steer[i] as number;
+    const d = w.steer[i] as number; // crab: contact offset
     w.x[i] = (mode.pivots.px[i] as number) - outward * rs * Math.sin(d);
     w.y[i] = (mode.pivots.py[i] as number) + outward * rs * Math.cos(d);
   }
@@ -497,8 +527,8 @@ function skidTurn(
     const a = side;
     const b = side + 2;
     const sideLoad = (w.load[a] as number) + (w.load[b] as number);
-    for (const i of [a, b]) {
-      const o = (mirrored ? MIRROR[i]! : i) * FIELDS;
+    for (let i = a; i <= b; i += 2) {
+      const o = slot(i, mirrored);
       out[o + F_LON_SCRUB] = ((chi - 1) * track) / 2;
       out[o + F_LON_ENERGY] = ((moment * (chi - 1)) / 2) * ((w.load[i] as number) / sideLoad);
     }

@@ -1,7 +1,7 @@
 import {
-  trapezoidOuterRad,
-  trapezoidOuterSlope,
+  solveTrapezoid,
   type TrapezoidLinkage,
+  type TrapezoidSolution,
 } from "./linkage-outer-angle";
 import type { SteerMap } from "./turn-solver";
 import type { WheelSet } from "./wheel-set";
@@ -21,11 +21,24 @@ export interface WheelPivots {
   scrubRadius: readonly number[];
 }
 
-function placeContact(w: WheelSet, g: WheelPivots, i: number, delta: number): void {
+/** Writes steer δ (with its sine and cosine) and the contact position of wheel i. */
+function placeWheel(
+  w: WheelSet,
+  g: WheelPivots,
+  i: number,
+  delta: number,
+  sin: number,
+  cos: number,
+  slope: number,
+): void {
+  w.steer[i] = delta;
+  w.sinSteer[i] = sin;
+  w.cosSteer[i] = cos;
+  w.steerSlope[i] = slope;
   const outward = (g.py[i] ?? 0) >= 0 ? 1 : -1;
   const rs = g.scrubRadius[i] ?? 0;
-  w.x[i] = (g.px[i] ?? 0) - outward * rs * Math.sin(delta);
-  w.y[i] = (g.py[i] ?? 0) + outward * rs * Math.cos(delta);
+  w.x[i] = (g.px[i] ?? 0) - outward * rs * sin;
+  w.y[i] = (g.py[i] ?? 0) + outward * rs * cos;
 }
 
 /**
@@ -50,23 +63,28 @@ export class IcrLineMap implements SteerMap {
     const yc = (g.py[this.reference] ?? 0) + (refDx * Math.cos(p)) / sp;
     const dyc = -refDx / (sp * sp);
     for (let i = 0; i < w.count; i++) {
-      let delta = 0;
-      let slope = 0;
-      if (this.steered[i]) {
-        const source = this.copyFrom[i] ?? -1;
-        if (source >= 0) {
-          delta = w.steer[source] as number;
-          slope = w.steerSlope[source] as number;
-        } else {
-          const dx = (g.px[i] ?? 0) - this.xc;
-          const dy = yc - (g.py[i] ?? 0);
-          delta = Math.atan2(dx, dy);
-          slope = (-dx / (dx * dx + dy * dy)) * dyc;
-        }
+      if (!this.steered[i]) {
+        placeWheel(w, g, i, 0, 0, 1, 0);
+        continue;
       }
-      w.steer[i] = delta;
-      w.steerSlope[i] = slope;
-      placeContact(w, g, i, delta);
+      const source = this.copyFrom[i] ?? -1;
+      if (source >= 0) {
+        placeWheel(
+          w,
+          g,
+          i,
+          w.steer[source] as number,
+          w.sinSteer[source] as number,
+          w.cosSteer[source] as number,
+          w.steerSlope[source] as number,
+        );
+        continue;
+      }
+      const dx = (g.px[i] ?? 0) - this.xc;
+      const dy = yc - (g.py[i] ?? 0);
+      const rho2 = dx * dx + dy * dy;
+      const rho = Math.sqrt(rho2);
+      placeWheel(w, g, i, Math.atan2(dx, dy), dx / rho, dy / rho, (-dx / rho2) * dyc);
     }
     return true;
   }
@@ -74,6 +92,8 @@ export class IcrLineMap implements SteerMap {
 
 /** Front axle steered through a trapezoid linkage, inner = front-left; rear fixed. */
 export class TrapezoidMap implements SteerMap {
+  private readonly outer: TrapezoidSolution = { outer: 0, sinOuter: 0, cosOuter: 1, slope: 1 };
+
   constructor(
     private readonly g: WheelPivots,
     private readonly linkage: TrapezoidLinkage,
@@ -81,17 +101,14 @@ export class TrapezoidMap implements SteerMap {
 
   apply(p: number, w: WheelSet): boolean {
     if (!(p > 0 && p < Math.PI / 2)) return false;
-    const outer = trapezoidOuterRad(this.linkage, p);
-    if (Number.isNaN(outer)) return false;
-    w.steer[0] = p;
-    w.steerSlope[0] = 1;
-    w.steer[1] = outer;
-    w.steerSlope[1] = trapezoidOuterSlope(this.linkage, p, outer);
-    w.steer[2] = 0;
-    w.steerSlope[2] = 0;
-    w.steer[3] = 0;
-    w.steerSlope[3] = 0;
-    for (let i = 0; i < 4; i++) placeContact(w, this.g, i, w.steer[i] as number);
+    const sin = Math.sin(p);
+    const cos = Math.cos(p);
+    const o = this.outer;
+    if (!solveTrapezoid(this.linkage, p, sin, cos, o) || !(o.slope > 0)) return false;
+    placeWheel(w, this.g, 0, p, sin, cos, 1);
+    placeWheel(w, this.g, 1, o.outer, o.sinOuter, o.cosOuter, o.slope);
+    placeWheel(w, this.g, 2, 0, 0, 1, 0);
+    placeWheel(w, this.g, 3, 0, 0, 1, 0);
     return true;
   }
 }
@@ -109,18 +126,22 @@ export class TurntableMap implements SteerMap {
     const h = this.frontTrack / 2;
     const s = Math.sin(p);
     const c = Math.cos(p);
-    w.steer[0] = p;
-    w.steer[1] = p;
-    w.steerSlope[0] = 1;
-    w.steerSlope[1] = 1;
+    for (let i = 0; i < 2; i++) {
+      w.steer[i] = p;
+      w.sinSteer[i] = s;
+      w.cosSteer[i] = c;
+      w.steerSlope[i] = 1;
+    }
     w.x[0] = this.kingX - h * s;
     w.y[0] = h * c;
     w.x[1] = this.kingX + h * s;
     w.y[1] = -h * c;
-    w.steer[2] = 0;
-    w.steer[3] = 0;
-    w.steerSlope[2] = 0;
-    w.steerSlope[3] = 0;
+    for (let i = 2; i < 4; i++) {
+      w.steer[i] = 0;
+      w.sinSteer[i] = 0;
+      w.cosSteer[i] = 1;
+      w.steerSlope[i] = 0;
+    }
     w.x[2] = 0;
     w.x[3] = 0;
     w.y[2] = this.rearTrack / 2;

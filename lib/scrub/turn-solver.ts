@@ -49,9 +49,8 @@ function assemble(w: WheelSet, u: number, v: number, r: number, withSteer: boole
   for (let i = 0; i < n; i++) {
     const x = w.x[i] as number;
     const y = w.y[i] as number;
-    const d = w.steer[i] as number;
-    const s = Math.sin(d);
-    const c = Math.cos(d);
+    const s = w.sinSteer[i] as number;
+    const c = w.cosSteer[i] as number;
     const vx = u - r * y;
     const vy = v + r * x;
     const num = vx * s - vy * c;
@@ -60,8 +59,31 @@ function assemble(w: WheelSet, u: number, v: number, r: number, withSteer: boole
     if (Math.abs(den) < floor) den = sgn * floor;
     const aden = Math.abs(den);
     const sigma = num / aden;
-    const f = w.tyreForce(i, sigma);
-    const fs = w.tyreSlope(i, sigma);
+    // Tyre force and slope (brush, PHYSICS.md §5.5, or linear), inlined for speed.
+    const stiffness = w.stiffness[i] as number;
+    let f: number;
+    let fs: number;
+    if (w.brush) {
+      const muFz = (w.friction[i] as number) * (w.load[i] as number);
+      if (muFz > 0) {
+        const t = (stiffness / (3 * muFz)) * (sigma < 0 ? -sigma : sigma);
+        if (t >= 1) {
+          f = sigma < 0 ? -muFz : muFz;
+          fs = 0;
+        } else {
+          const m = muFz * t * (3 - 3 * t + t * t);
+          f = sigma < 0 ? -m : m;
+          const one = 1 - t;
+          fs = stiffness * one * one;
+        }
+      } else {
+        f = 0;
+        fs = 0;
+      }
+    } else {
+      f = stiffness * sigma;
+      fs = stiffness;
+    }
     w.sigma[i] = sigma;
     w.force[i] = f;
     w.lateralSpeed[i] = num;
@@ -184,7 +206,7 @@ export function solveAtRadius(
       converged = true;
       break;
     }
-    const speed = Math.hypot(u, v);
+    const speed = Math.sqrt(u * u + v * v);
     const drdv = v / (radius * speed);
     const a11 = g1v + g1r * drdv - mass * u * drdv;
     const a12 = g1p;
@@ -221,7 +243,7 @@ export function solveAtRadius(
   state.u = u;
   state.v = v;
   state.p = p;
-  state.r = Math.hypot(u, v) / radius;
+  state.r = Math.sqrt(u * u + v * v) / radius;
   state.converged = converged;
   state.iterations = it;
 }
@@ -238,7 +260,7 @@ function residualRadius(
   lever: number,
 ): number {
   if (!map.apply(p, w)) return Infinity;
-  const r = Math.hypot(u, v) / radius;
+  const r = Math.sqrt(u * u + v * v) / radius;
   assemble(w, u, v, r, true);
   g1 -= mass * u * r;
   g2 -= mass * u * r * xcg;
@@ -261,12 +283,8 @@ export function solveLateral(
 ): void {
   const scale = w.frictionScale();
   const target = mass * u * r;
-  const lateral = (v: number): number => {
-    assemble(w, u, v, r, false);
-    return g1 - target;
-  };
   let v = state.v;
-  let g = lateral(v);
+  let g = lateralResidual(w, u, v, r, target);
   let it = 0;
   if (Math.abs(g) <= TOLERANCE * scale) {
     finish(state, u, v, r, true, 0);
@@ -284,7 +302,7 @@ export function solveLateral(
       glo = ghi;
       hi += step;
       step *= 2;
-      ghi = lateral(hi);
+      ghi = lateralResidual(w, u, hi, r, target);
       it++;
     }
   } else {
@@ -293,19 +311,19 @@ export function solveLateral(
       ghi = glo;
       lo -= step;
       step *= 2;
-      glo = lateral(lo);
+      glo = lateralResidual(w, u, lo, r, target);
       it++;
     }
   }
   if (!(glo >= 0 && ghi <= 0)) {
+    lateralResidual(w, u, v, r, target);
     finish(state, u, v, r, false, it);
-    lateral(v);
     return;
   }
   v = (lo + hi) / 2;
   let converged = false;
   for (; it < 400; it++) {
-    g = lateral(v);
+    g = lateralResidual(w, u, v, r, target);
     if (Math.abs(g) <= TOLERANCE * scale || hi - lo <= 1e-13 * (Math.abs(u) + Math.abs(r) + 1)) {
       converged = true;
       break;
@@ -316,6 +334,11 @@ export function solveLateral(
     v = newton > lo && newton < hi ? newton : (lo + hi) / 2;
   }
   finish(state, u, v, r, converged, it);
+}
+
+function lateralResidual(w: WheelSet, u: number, v: number, r: number, target: number): number {
+  assemble(w, u, v, r, false);
+  return g1 - target;
 }
 
 function finish(
@@ -337,7 +360,9 @@ function finish(
 function leverScale(w: WheelSet): number {
   let m = 0;
   for (let i = 0; i < w.count; i++) {
-    const d = Math.hypot(w.x[i] as number, w.y[i] as number);
+    const xi = w.x[i] as number;
+    const yi = w.y[i] as number;
+    const d = Math.sqrt(xi * xi + yi * yi);
     if (d > m) m = d;
   }
   return m > 0 ? m : 1;

@@ -10,6 +10,9 @@ export class WheelSet {
   readonly x: Float64Array;
   readonly y: Float64Array;
   readonly steer: Float64Array;
+  /** sin δ and cos δ, written together with `steer` (saves trig calls in the solver loops). */
+  readonly sinSteer: Float64Array;
+  readonly cosSteer: Float64Array;
   /** dδ/dp: derivative of each steer angle with respect to the steering input p. */
   readonly steerSlope: Float64Array;
   readonly load: Float64Array;
@@ -29,6 +32,8 @@ export class WheelSet {
     this.x = new Float64Array(count);
     this.y = new Float64Array(count);
     this.steer = new Float64Array(count);
+    this.sinSteer = new Float64Array(count);
+    this.cosSteer = new Float64Array(count).fill(1);
     this.steerSlope = new Float64Array(count);
     this.load = new Float64Array(count);
     this.stiffness = new Float64Array(count);
@@ -37,6 +42,13 @@ export class WheelSet {
     this.force = new Float64Array(count);
     this.lateralSpeed = new Float64Array(count);
     this.rollingSpeed = new Float64Array(count);
+  }
+
+  /** Set wheel i's steer angle (rad) with its sine and cosine. */
+  setSteer(i: number, delta: number): void {
+    this.steer[i] = delta;
+    this.sinSteer[i] = Math.sin(delta);
+    this.cosSteer[i] = Math.cos(delta);
   }
 
   tyreForce(i: number, sigma: number): number {

@@ -43,7 +43,9 @@ function benchSolves(id: string, minRadius: number, skid: boolean): number {
     lead: null,
     longitudinalStiffnessCoefficient: 8,
   };
-  const list = turns(200_000, minRadius, skid).map((k) => k as unknown as ReturnType<typeof ZTurn.parse>);
+  const list = turns(200_000, minRadius, skid).map(
+    (k) => k as unknown as ReturnType<typeof ZTurn.parse>,
+  );
   let sink = 0;
   for (let i = 0; i < 20_000; i++) sink += solveUnitTurn(pm, mode, list[i]!, ctx).wheels[5]!; // warm-up
   const start = process.hrtime.bigint();
@@ -82,8 +84,16 @@ function benchDutyCycle(turnDetail: boolean): number {
 }
 
 const fmt = (n: number) => Math.round(n).toLocaleString("en-GB");
-console.log(`Node ${process.version}, ${os.cpus()[0]?.model ?? "cpu"} (${os.cpus().length} cores), single thread`);
-console.log(`trapezoid-linkage tractor, brush tyres: ${fmt(benchSolves("row-crop-tractor", 4, false))} turn solves/s`);
-console.log(`wheeled skid steer, brush tyres:        ${fmt(benchSolves("wheeled-skid-steer", 0, true))} turn solves/s`);
+console.log(
+  `Node ${process.version}, ${os.cpus()[0]?.model ?? "cpu"} (${os.cpus().length} cores), single thread`,
+);
+console.log(
+  `trapezoid-linkage tractor, brush tyres: ${fmt(benchSolves("row-crop-tractor", 4, false))} turn solves/s`,
+);
+console.log(
+  `wheeled skid steer, brush tyres:        ${fmt(benchSolves("wheeled-skid-steer", 0, true))} turn solves/s`,
+);
 console.log(`1,000,000-turn duty cycle, per-wheel detail: ${benchDutyCycle(true).toFixed(2)} s`);
-console.log(`1,000,000-turn duty cycle, no per-wheel detail: ${benchDutyCycle(false).toFixed(2)} s`);
+console.log(
+  `1,000,000-turn duty cycle, no per-wheel detail: ${benchDutyCycle(false).toFixed(2)} s`,
+);
