@@ -78,4 +78,52 @@ describe("inviting a customer by e-mail", () => {
     await again.getByText("This invitation was already used.").waitFor();
     await context.close();
   });
+
+  it("a signed-out visitor of a signed-in page is sent to sign-in, and comes back after", async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto(`${baseUrl}/team`);
+    await page.waitForURL((url) => url.pathname === "/sign-in");
+    await page.getByLabel("E-mail address").fill("admin@brackenridge.test");
+    await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL((url) => url.pathname === "/team");
+    await page.getByRole("heading", { name: "Team" }).waitFor();
+    await context.close();
+  });
+
+  it("an estimator does not get the team page", async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await signIn(page, "estimator@brackenridge.test", DEMO_PASSWORD);
+    await page.goto(`${baseUrl}/team`);
+    await page.getByText("Not available for your role").waitFor();
+    await context.close();
+  });
+
+  it("signs in with an e-mailed link, shown in the development mailbox", async () => {
+    const since = new Date(Date.now() - 2000);
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await page.goto(`${baseUrl}/sign-in`);
+    await page.getByRole("tab", { name: "E-mail me a link" }).click();
+    await page.getByLabel("E-mail address").fill("morwenna@hollinvale.test");
+    await page.getByRole("button", { name: "Send sign-in link" }).click();
+    await page.getByText(/a sign-in link is on its way/).waitFor();
+    const mail = await waitForMail({ db, to: "morwenna@hollinvale.test", since });
+    const link = linkFrom(mail, "/api/auth/callback/nodemailer");
+
+    // The mailbox page lists the message with its link.
+    await page.goto(`${baseUrl}/dev/mailbox`);
+    await page.getByText("Your Treadcast sign-in link").first().waitFor();
+
+    await page.goto(link);
+    await page.waitForURL((url) => url.pathname === "/dashboard");
+    const res = await context.request.get(`${baseUrl}/api/v1/customers`);
+    expect(res.status()).toBe(200);
+    const body = await res.text();
+    expect(body).toContain("Hollin Vale Farm");
+    expect(body).not.toContain("Eastmere Contracting");
+    await context.close();
+  });
 });
