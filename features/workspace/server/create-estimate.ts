@@ -10,8 +10,9 @@ import { loadMachine } from "@/features/workspace/server/get-machine";
 import { loadSite } from "@/features/workspace/server/get-site";
 import {
   loadDutyCycleForEstimate,
-  straightOrDefault,
+  straightWithMix,
 } from "@/features/workspace/server/load-duty-cycle";
+import { toEngineDutyCycle } from "@/lib/duty-cycles/to-engine-duty-cycle";
 import { fillSurfaces, MissingSurfaceMixError } from "@/features/workspace/lib/fill-surfaces";
 import { toEstimateDto } from "@/features/workspace/server/estimate-dto";
 
@@ -59,20 +60,23 @@ export async function createEstimate({
     throw invalidReference("siteId", "Pick a site of the duty cycle's customer.");
   const mix = (site?.surfaceMix ?? null) as Partial<Record<TSurfaceKind, number>> | null;
 
-  let engineTurns;
+  let filled;
   try {
-    engineTurns = fillSurfaces(turns, mix);
+    filled = fillSurfaces(turns, mix);
   } catch (e) {
     if (e instanceof MissingSurfaceMixError) throw invalidReference("siteId", e.message);
     throw e;
   }
   const spec = machine.spec as TMachineInput;
-  const dutyCycle = {
+  // Long logs are merged into kinds of turn; schedules and builder cycles keep every row.
+  const dutyCycle = toEngineDutyCycle({
     name: cycle.name,
-    turns: engineTurns,
-    straight: straightOrDefault(straight, mix),
-  };
-  const options = { turnDetail: engineTurns.length <= TURN_DETAIL_LIMIT };
+    // Renumbered: a turn split across the site's surfaces must stay several kinds.
+    turns: filled.map((t, i) => ({ ...t, seq: i })),
+    straight: straightWithMix(straight, mix),
+    mergeKinds: cycle.source === "telematics",
+  });
+  const options = { turnDetail: dutyCycle.turns.length <= TURN_DETAIL_LIMIT };
   let result;
   try {
     result = estimate(spec, dutyCycle, options);

@@ -3,14 +3,14 @@ import { and, asc, eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { dutyCycles, dutyCycleTurns } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
-import type { TStraightTravel, TSurfaceKind } from "@/lib/scrub";
 import { can } from "@/lib/authz/policy";
+import type { TStraight } from "@/lib/duty-cycles/stored-duty-cycle";
 import { invalidReference } from "@/features/workspace/server/errors";
-import type { TTurnWithOptionalSurface } from "@/features/workspace/lib/fill-surfaces";
+import type { TSurfaceMixShares } from "@/features/workspace/lib/fill-surfaces";
 
 /**
- * Reads a ready duty cycle the actor may see and its turn kinds, as engine turns whose surface
- * may still be unknown (filled from a site mix by the caller).
+ * Reads a ready duty cycle the actor may see with its stored turns (whose surface may still be
+ * unknown and is filled from a site mix by the caller).
  */
 export async function loadDutyCycleForEstimate(db: DbOrTx, actor: TActor, id: string) {
   const [cycle] = await db
@@ -29,32 +29,36 @@ export async function loadDutyCycleForEstimate(db: DbOrTx, actor: TActor, id: st
     .from(dutyCycleTurns)
     .where(eq(dutyCycleTurns.dutyCycleId, id))
     .orderBy(asc(dutyCycleTurns.seq));
-  const turns: TTurnWithOptionalSurface[] = rows.map((r) => ({
+  const turns = rows.map((r) => ({
+    seq: r.seq,
+    label: r.label,
+    direction: r.direction === "right" ? ("right" as const) : ("left" as const),
+    radius: r.radius,
+    steerInput: r.steerInput,
+    headingChange: r.headingChange,
+    speed: r.speed,
     perHour: r.perHour,
-    turn: {
-      ...(r.label ? { label: r.label } : {}),
-      direction: r.direction === "right" ? "right" : "left",
-      ...(r.radius !== null ? { radius: r.radius } : { steerInput: r.steerInput ?? 0 }),
-      headingChange: r.headingChange,
-      speed: r.speed,
-      surface: r.surface,
-      loadState: r.loadState === "unladen" ? "unladen" : "laden",
-    },
+    surface: r.surface,
+    loadState: r.loadState === "unladen" ? ("unladen" as const) : ("laden" as const),
+    reverse: r.reverse !== 0,
+    distance: r.distance,
+    duration: r.duration,
+    startTime: r.startTime,
   }));
-  const straight = (cycle.straight as TStraightTravel | null) ?? null;
-  return { cycle, turns, straight };
+  return { cycle, turns, straight: (cycle.straight as TStraight | null) ?? null };
 }
 
-export function straightOrDefault(
-  straight: TStraightTravel | null,
-  mix: Partial<Record<TSurfaceKind, number>> | null,
-): TStraightTravel {
-  if (straight && Object.keys(straight.surfaceShares ?? {}).length > 0) return straight;
+/** Straight travel as stored, with the site's mix where the cycle recorded no surfaces. */
+export function straightWithMix(
+  straight: TStraight | null,
+  mix: TSurfaceMixShares | null,
+): TStraight {
+  const hasShares =
+    straight && Object.values(straight.surfaceShares ?? {}).some((v) => (v ?? 0) > 0);
   return {
     distancePerHour: straight?.distancePerHour ?? 0,
     speed: straight?.speed ?? 2,
-    surfaceShares: mix ?? { "firm-soil": 1 },
-    frontDrive: straight?.frontDrive ?? "disengaged",
+    surfaceShares: hasShares ? straight.surfaceShares : (mix ?? { "firm-soil": 1 }),
     ladenShare: straight?.ladenShare ?? 0,
   };
 }

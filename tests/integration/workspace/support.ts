@@ -62,3 +62,64 @@ export function testTractorSpec(overrides: Partial<TMachineInput> = {}): TMachin
     ...overrides,
   };
 }
+
+/** A ready duty cycle stored as the duty-cycle import would leave it (test data, invented). */
+export async function insertReadyDutyCycle(opts: {
+  dealershipId: string;
+  customerId: string;
+  name?: string;
+  status?: "ready" | "pending" | "failed";
+  turns?: {
+    label?: string;
+    radius: number;
+    headingChange: number;
+    perHour: number;
+    surface: string;
+    direction?: "left" | "right";
+  }[];
+}) {
+  const { dutyCycles, dutyCycleTurns } = await import("@/db/schema");
+  const [cycle] = await db
+    .insert(dutyCycles)
+    .values({
+      dealershipId: opts.dealershipId,
+      customerId: opts.customerId,
+      name: opts.name ?? "Test yard work",
+      source: "schedule",
+      status: opts.status ?? "ready",
+      operatingHours: 1,
+      straight: {
+        distancePerHour: 3000,
+        speed: 3,
+        surfaceShares: { "firm-soil": 1 },
+        ladenShare: 0.5,
+      },
+    })
+    .returning();
+  const turns = opts.turns ?? [
+    { label: "Headland turn", radius: 6, headingChange: 180, perHour: 20, surface: "firm-soil" },
+    {
+      label: "Yard turn",
+      radius: 8,
+      headingChange: 90,
+      perHour: 12,
+      surface: "concrete-asphalt",
+      direction: "right" as const,
+    },
+  ];
+  await db.insert(dutyCycleTurns).values(
+    turns.map((t, i) => ({
+      dutyCycleId: cycle!.id,
+      seq: i,
+      label: t.label ?? null,
+      direction: t.direction ?? "left",
+      radius: t.radius,
+      headingChange: t.headingChange,
+      speed: 1.5,
+      perHour: t.perHour,
+      surface: t.surface,
+      loadState: "laden",
+    })),
+  );
+  return cycle!;
+}

@@ -20,18 +20,16 @@ export function TyreSizePreview({
       </p>
     );
   const d = parsed.dims;
-  {
-    return (
-      <p className="text-xs text-ok-700" aria-live="polite">
-        Reads as {formatQuantity(system, "length-mm", d.sectionWidth, system === "metric" ? 0 : 1)}{" "}
-        wide, {d.aspectRatio} % series, {d.rimDiameter} in rim, about{" "}
-        {formatQuantity(system, "length-mm", d.overallDiameter, system === "metric" ? 0 : 1)}{" "}
-        overall ({d.construction}
-        {d.flexion !== "standard" ? `, ${d.flexion}` : ""}). Nominal values: enter the data-book
-        figures below when you have them.
-      </p>
-    );
-  }
+  return (
+    <p className="text-xs text-ok-700" aria-live="polite">
+      Reads as {formatQuantity(system, "length-mm", d.sectionWidth, system === "metric" ? 0 : 1)}{" "}
+      wide, {d.aspectRatio} % series, {d.rimDiameter} in rim, about{" "}
+      {formatQuantity(system, "length-mm", d.overallDiameter, system === "metric" ? 0 : 1)} overall
+      ({d.construction}
+      {d.flexion !== "standard" ? `, ${d.flexion}` : ""}). Nominal values: enter the data-book
+      figures below when you have them.
+    </p>
+  );
 }
 
 function readSize(designation: string): { dims: TTyreDimensions } | { error: string } {
