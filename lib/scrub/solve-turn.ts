@@ -135,8 +135,24 @@ export function solveUnitTurn(
     ((loadsN[0]! + loadsN[1]!) * mode.xFront + (loadsN[2]! + loadsN[3]!) * mode.xRear) /
     (massKg * GRAVITY);
   const moving = turn.speed > 0;
-  const u = moving ? turn.speed : 1;
-  const mass = moving ? massKg : 0;
+  // Tyre slips are scale-free in (u, v, r), so solve at unit forward speed and carry the speed
+  // in the inertia term: Σ F = m·V²·r' with r' = r/V (no underflow at tiny speeds).
+  const u = 1;
+  const mass = massKg * turn.speed * turn.speed;
+
+  // Grip limit: a steady turn needs m·V²/R of lateral force; beyond Σ μN the machine slides.
+  if (moving && turn.radius !== undefined && turn.radius > 0 && mode.layout !== "crab") {
+    const needed = (turn.speed * turn.speed) / turn.radius;
+    if (needed > mu * GRAVITY) {
+      return infeasible(
+        mode,
+        turn.radius,
+        NaN,
+        "high-lateral-acceleration",
+        `At ${turn.speed} m/s on a ${turn.radius} m radius the lateral acceleration (${needed.toFixed(1)} m/s²) exceeds the grip of this surface (μ = ${mu}): the machine would slide or tip. Slow down.`,
+      );
+    }
+  }
 
   switch (mode.layout) {
     case "articulated":
@@ -144,7 +160,7 @@ export function solveUnitTurn(
     case "crab":
       return crabTurn(pm, mode, turn, ctx, mirrored);
     case "skid":
-      return skidTurn(pm, mode, turn, ctx, mirrored, u, mass, tracked);
+      return skidTurn(pm, mode, turn, ctx, mirrored, turn.speed, mass, tracked);
     default:
       break;
   }
@@ -204,7 +220,7 @@ export function solveUnitTurn(
   result.radius = radius;
   result.steerInput = toDegrees(input);
   result.centre = { x: -state.v / state.r, y: (mirrored ? -1 : 1) * (u / state.r) };
-  result.lateralAcceleration = moving ? u * state.r : 0;
+  result.lateralAcceleration = moving ? turn.speed * turn.speed * state.r : 0;
   result.converged = state.converged;
   return checkTurningRadius(pm, result);
 }
@@ -508,9 +524,9 @@ function skidTurn(
   }
   let u: number;
   let r: number;
-  if (radius > 0) {
-    u = speed;
-    r = speed / radius;
+  if (radius > 1e-6) {
+    u = 1;
+    r = 1 / radius;
   } else {
     u = 0;
     r = 1;
@@ -536,7 +552,7 @@ function skidTurn(
   result.radius = radius;
   result.steerInput = 0;
   result.centre = { x: -state.v / r, y: (mirrored ? -1 : 1) * (u / r) };
-  result.lateralAcceleration = mass > 0 ? u * r : 0;
+  result.lateralAcceleration = speed * speed * u * r;
   result.turningMoment = moment;
   result.converged = state.converged;
   return result;
