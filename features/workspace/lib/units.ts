@@ -49,9 +49,9 @@ export function toSi(system: TUnitSystem, quantity: TQuantity, value: number): n
   return UNITS[system][quantity].toSi(value);
 }
 
-/** Rounds for display so a converted value does not show float noise (4 significant decimals). */
+/** Rounds for display so a converted value shows no float noise yet converts back within 1 in 10⁵. */
 export function roundForInput(value: number): number {
-  return Math.round(value * 10_000) / 10_000;
+  return Number.isFinite(value) ? Number(value.toPrecision(6)) : value;
 }
 
 /** "12.3 ft" / "3.75 m" with sensible decimals. */
