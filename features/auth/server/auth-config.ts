@@ -72,7 +72,7 @@ function buildConfig(): NextAuthConfig {
     logger: {
       // A wrong password is routine and already in the audit log; keep the server log for faults.
       error(error) {
-        if (error.name === "CredentialsSignin") return;
+        if ((error as { type?: string }).type === "CredentialsSignin") return;
         console.error("[auth]", error);
       },
     },
