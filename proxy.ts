@@ -3,16 +3,8 @@
 export { auth as proxy } from "@/features/auth/server/auth-config";
 
 export const config = {
-  matcher: [
-    "/dashboard/:path*",
-    "/customers/:path*",
-    "/machines/:path*",
-    "/estimates/:path*",
-    "/duty-cycles/:path*",
-    "/reports/:path*",
-    "/team/:path*",
-    "/audit/:path*",
-    "/account/:path*",
-    "/billing/:path*",
-  ],
+  // Every page except the public ones (home, sign-in, invitation, password reset, dev mailbox),
+  // API routes (they answer 401 themselves), Next's assets and files with an extension. A new
+  // workspace page is covered without editing this list.
+  matcher: ["/((?!api/|_next/|sign-in|invite/|reset-password|dev/)(?!.*\\.\\w+$).+)"],
 };

@@ -6,6 +6,8 @@ import { startSmtpFake } from "@/mocks/mail/smtp-fake";
 // The real SMTP fake on a free port; the app's mailer reads SMTP_PORT on first use.
 const smtp = await startSmtpFake({ port: 0 });
 process.env.SMTP_PORT = String(smtp.port);
+// A small per-IP limit so the IP rule can be reached in a few requests.
+process.env.AUTH_LIMIT_PER_IP = "5";
 
 const { getDb, getPool } = await import("@/db/client");
 const { auditEvents, capturedMails, users } = await import("@/db/schema");
@@ -175,5 +177,30 @@ describe("e-mail link sign-in", () => {
       .from(capturedMails)
       .where(eq(capturedMails.to, [unknownEmail]));
     expect(ghostMail).toHaveLength(0);
+  });
+});
+
+describe("per-IP limit on e-mail links", () => {
+  it("after 5 requests from one IP, further requests are refused whatever the address", async () => {
+    const ip = uniqueIp();
+    const locations: string[] = [];
+    for (let i = 0; i < 6; i++) {
+      const { res } = await postForm(
+        "/api/auth/signin/nodemailer",
+        { email: `spray-${i}-${uniqueTag()}@example.test` },
+        ip,
+      );
+      locations.push(res.headers.get("location") ?? "");
+    }
+    expect(locations.slice(0, 5).every((l) => l.includes("verify-request"))).toBe(true);
+    expect(locations[5]).toContain("error=");
+    expect(locations[5]).not.toContain("verify-request");
+    // Another IP is unaffected.
+    const { res } = await postForm(
+      "/api/auth/signin/nodemailer",
+      { email: `spray-x-${uniqueTag()}@example.test` },
+      uniqueIp(),
+    );
+    expect(res.headers.get("location")).toContain("verify-request");
   });
 });
