@@ -1,0 +1,450 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useEffect, useMemo, useState } from "react";
+import { ZSurfaceKind, type TSurfaceKind } from "@/lib/scrub/schemas";
+import {
+  mappingProblems,
+  type TColumnMapping,
+  type TFileKind,
+} from "@/lib/duty-cycles/column-mapping";
+import { guessColumns, guessDecimal, guessKind } from "@/lib/duty-cycles/guess-mapping";
+import { SURFACE_LABELS } from "@/lib/duty-cycles/surface-names";
+import { Button } from "@/lib/ui/button";
+import { Card } from "@/lib/ui/card";
+import { Caution } from "@/lib/ui/caution";
+import { Field } from "@/lib/ui/field";
+import { Input, Select } from "@/lib/ui/input";
+import { toast } from "@/lib/ui/toast";
+import { useCreateDutyCycle } from "@/features/duty-cycles/api/duty-cycles";
+import {
+  useMappingTemplates,
+  useSaveMappingTemplate,
+} from "@/features/duty-cycles/api/mapping-templates";
+import { useUploadFile } from "@/features/duty-cycles/api/upload-file";
+import { ColumnMappingEditor } from "@/features/duty-cycles/components/column-mapping-editor";
+import { ProgressBar } from "@/features/duty-cycles/components/progress-bar";
+import { readPreview, type TPreview } from "@/features/duty-cycles/components/read-preview";
+
+type TCustomerChoice = { id: string; name: string };
+
+const DELIMITERS: [string, string][] = [
+  ["", "Detect"],
+  [",", "Comma ,"],
+  [";", "Semicolon ;"],
+  ["\t", "Tab"],
+  ["|", "Bar |"],
+];
+
+const initialMapping = (kind: TFileKind): TColumnMapping => ({
+  kind,
+  delimiter: ",",
+  decimal: ".",
+  hasHeader: true,
+  encoding: "utf-8",
+  columns: {},
+  defaults: { surface: "firm-soil", loadState: "unladen", shiftHours: 8, maxSpeed: 25 },
+});
+
+/** Upload a CSV, map its columns over a preview, and start the import. */
+export function UploadWizard({
+  customers,
+  uploadLimitBytes,
+}: {
+  customers: TCustomerChoice[];
+  uploadLimitBytes: number;
+}) {
+  const router = useRouter();
+  const [file, setFile] = useState<File | null>(null);
+  const [delimiterChoice, setDelimiterChoice] = useState("");
+  const [mapping, setMapping] = useState<TColumnMapping>(initialMapping("telematics"));
+  const [preview, setPreview] = useState<TPreview | null>(null);
+  const [previewError, setPreviewError] = useState<string | null>(null);
+  const [progress, setProgress] = useState(0);
+  const [name, setName] = useState("");
+  const [customerId, setCustomerId] = useState(customers[0]?.id ?? "");
+  const [templateName, setTemplateName] = useState("");
+  const [templateApplied, setTemplateApplied] = useState(false);
+  const upload = useUploadFile(setProgress);
+  const create = useCreateDutyCycle();
+  const templates = useMappingTemplates(mapping.kind);
+  const saveTemplate = useSaveMappingTemplate();
+
+  // Re-read the preview when the file or how it is read changes.
+  useEffect(() => {
+    if (!file) return;
+    let stale = false;
+    readPreview(file, { delimiter: delimiterChoice, encoding: mapping.encoding })
+      .then((p) => {
+        if (stale) return;
+        setPreview(p);
+        setPreviewError(p.rows.length === 0 ? "The file shows no rows. Is it empty?" : null);
+        setMapping((m) => {
+          const headers = m.hasHeader
+            ? (p.rows[0] ?? [])
+            : (p.rows[0] ?? []).map((_c, i) => `Column ${i + 1}`);
+          const body = m.hasHeader ? p.rows.slice(1) : p.rows;
+          const kind = templateApplied ? m.kind : guessKind(headers, body.length);
+          return {
+            ...m,
+            kind,
+            delimiter: p.delimiter,
+            decimal: templateApplied ? m.decimal : guessDecimal(p.delimiter, body),
+            columns: templateApplied
+              ? m.columns
+              : guessColumns(kind, m.hasHeader ? headers : [], body[0]),
+          };
+        });
+      })
+      .catch(
+        () =>
+          !stale &&
+          setPreviewError("The file could not be read as text. Save it as CSV and try again."),
+      );
+    return () => {
+      stale = true;
+    };
+    // templateApplied is read, not watched: applying a template must not re-guess.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [file, delimiterChoice, mapping.encoding, mapping.hasHeader]);
+
+  const headers = useMemo(() => {
+    const first = preview?.rows[0] ?? [];
+    return mapping.hasHeader ? first : first.map((_c, i) => `Column ${i + 1}`);
+  }, [preview, mapping.hasHeader]);
+  const bodyRows = useMemo(
+    () => (mapping.hasHeader ? (preview?.rows.slice(1) ?? []) : (preview?.rows ?? [])),
+    [preview, mapping.hasHeader],
+  );
+  const problems = mappingProblems(mapping);
+  const uploaded = upload.data;
+
+  function chooseFile(f: File | null) {
+    setFile(f);
+    setPreview(null);
+    setProgress(0);
+    upload.reset();
+    if (!f) return;
+    if (f.size > uploadLimitBytes) {
+      setPreviewError(
+        `The file is ${(f.size / 1048576).toFixed(1)} MB; the upload limit is ${(uploadLimitBytes / 1048576).toFixed(0)} MB. Split the log into shorter periods.`,
+      );
+      return;
+    }
+    if (!name) setName(f.name.replace(/\.[^.]+$/, ""));
+    // Upload starts at once, while the columns are being mapped.
+    upload.mutate(f, { onError: (e) => toast.error(e.message) });
+  }
+
+  function applyTemplate(id: string) {
+    const t = templates.data?.find((x) => x.id === id);
+    if (!t) return;
+    setTemplateApplied(true);
+    setDelimiterChoice(t.mapping.delimiter);
+    setMapping({ ...t.mapping });
+    toast.success(`Template "${t.name}" applied.`);
+  }
+
+  async function submit() {
+    if (!uploaded) return;
+    try {
+      const created = await create.mutateAsync({
+        source: "upload",
+        name,
+        customerId,
+        uploadId: uploaded.id,
+        mapping,
+      });
+      router.push(`/duty-cycles/${created.id}`);
+    } catch (e) {
+      toast.error((e as Error).message);
+    }
+  }
+
+  return (
+    <div className="flex flex-col gap-5">
+      <Card title="1. Choose the file">
+        <div className="grid gap-4 sm:grid-cols-2">
+          <Field
+            label="CSV file"
+            hint={`A telematics log or a turn schedule, up to ${(uploadLimitBytes / 1048576).toFixed(0)} MB.`}
+          >
+            <Input
+              type="file"
+              accept=".csv,.txt,text/csv"
+              className="py-2"
+              onChange={(e) => chooseFile(e.target.files?.[0] ?? null)}
+            />
+          </Field>
+          <Field label="What the file holds">
+            <Select
+              value={mapping.kind}
+              onChange={(e) => {
+                const kind = e.target.value as TFileKind;
+                setMapping((m) => ({
+                  ...m,
+                  kind,
+                  columns: guessColumns(kind, m.hasHeader ? headers : [], bodyRows[0]),
+                }));
+              }}
+            >
+              <option value="telematics">Telematics log (one row per sample)</option>
+              <option value="schedule">Turn schedule (one row per kind of turn)</option>
+            </Select>
+          </Field>
+        </div>
+        {file ? (
+          <div className="mt-4">
+            <ProgressBar
+              label={upload.isError ? "Upload failed" : uploaded ? "Uploaded" : "Uploading"}
+              value={progress}
+              tone={upload.isError ? "failed" : uploaded ? "done" : "work"}
+            />
+            {upload.isError ? (
+              <p role="alert" className="mt-2 text-sm text-danger-700">
+                {upload.error.message}
+              </p>
+            ) : null}
+          </div>
+        ) : null}
+        {previewError ? (
+          <p role="alert" className="mt-3 text-sm text-danger-700">
+            {previewError}
+          </p>
+        ) : null}
+      </Card>
+
+      {preview && preview.rows.length > 0 ? (
+        <Card title="2. Map the columns">
+          <div className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+            <Field label="Field separator">
+              <Select value={delimiterChoice} onChange={(e) => setDelimiterChoice(e.target.value)}>
+                {DELIMITERS.map(([v, l]) => (
+                  <option key={l} value={v}>
+                    {l}
+                    {v === "" && preview
+                      ? ` (found ${preview.delimiter === "\t" ? "tab" : preview.delimiter})`
+                      : ""}
+                  </option>
+                ))}
+              </Select>
+            </Field>
+            <Field label="Decimal mark">
+              <Select
+                value={mapping.decimal}
+                onChange={(e) =>
+                  setMapping((m) => ({ ...m, decimal: e.target.value as "." | "," }))
+                }
+              >
+                <option value=".">Point 12.5</option>
+                <option value=",">Comma 12,5</option>
+              </Select>
+            </Field>
+            <Field label="Text encoding">
+              <Select
+                value={mapping.encoding}
+                onChange={(e) =>
+                  setMapping((m) => ({ ...m, encoding: e.target.value as "utf-8" | "latin1" }))
+                }
+              >
+                <option value="utf-8">UTF-8</option>
+                <option value="latin1">Latin-1 (older Windows exports)</option>
+              </Select>
+            </Field>
+            <Field label="First row">
+              <Select
+                value={mapping.hasHeader ? "header" : "data"}
+                onChange={(e) =>
+                  setMapping((m) => ({ ...m, hasHeader: e.target.value === "header" }))
+                }
+              >
+                <option value="header">Column names</option>
+                <option value="data">Data</option>
+              </Select>
+            </Field>
+          </div>
+          {templates.data && templates.data.length > 0 ? (
+            <div className="mb-4 max-w-sm">
+              <Field
+                label="Use a saved mapping"
+                hint="Templates your dealership saved for files from the same source."
+              >
+                <Select defaultValue="" onChange={(e) => applyTemplate(e.target.value)}>
+                  <option value="">Choose a template…</option>
+                  {templates.data.map((t) => (
+                    <option key={t.id} value={t.id}>
+                      {t.name}
+                    </option>
+                  ))}
+                </Select>
+              </Field>
+            </div>
+          ) : null}
+          <ColumnMappingEditor
+            mapping={mapping}
+            headers={headers}
+            rows={bodyRows}
+            onChange={(columns) => setMapping((m) => ({ ...m, columns }))}
+          />
+          <div className="mt-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+            <Field label="Surface when the file gives none">
+              <Select
+                value={mapping.defaults.surface}
+                onChange={(e) =>
+                  setMapping((m) => ({
+                    ...m,
+                    defaults: { ...m.defaults, surface: e.target.value as TSurfaceKind },
+                  }))
+                }
+              >
+                {ZSurfaceKind.options.map((s) => (
+                  <option key={s} value={s}>
+                    {SURFACE_LABELS[s]}
+                  </option>
+                ))}
+              </Select>
+            </Field>
+            <Field label="Load state when the file gives none">
+              <Select
+                value={mapping.defaults.loadState}
+                onChange={(e) =>
+                  setMapping((m) => ({
+                    ...m,
+                    defaults: { ...m.defaults, loadState: e.target.value as "laden" | "unladen" },
+                  }))
+                }
+              >
+                <option value="unladen">Unladen</option>
+                <option value="laden">Laden</option>
+              </Select>
+            </Field>
+            <Field
+              label="Machine's top speed"
+              unit="km/h"
+              hint="Faster rows are rejected as impossible."
+            >
+              <Input
+                type="number"
+                min={1}
+                max={144}
+                value={Math.round(mapping.defaults.maxSpeed * 3.6)}
+                onChange={(e) =>
+                  setMapping((m) => ({
+                    ...m,
+                    defaults: { ...m.defaults, maxSpeed: Number(e.target.value) / 3.6 },
+                  }))
+                }
+              />
+            </Field>
+            {mapping.kind === "telematics" ? (
+              <Field label="Wheelbase" unit="m" hint="Needed only to read a steer angle column.">
+                <Input
+                  type="number"
+                  step="0.01"
+                  min={0.5}
+                  max={15}
+                  value={mapping.defaults.wheelbase ?? ""}
+                  onChange={(e) =>
+                    setMapping((m) => ({
+                      ...m,
+                      defaults: {
+                        ...m.defaults,
+                        wheelbase: e.target.value ? Number(e.target.value) : undefined,
+                      },
+                    }))
+                  }
+                />
+              </Field>
+            ) : (
+              <Field label="Hours in a shift" unit="h">
+                <Input
+                  type="number"
+                  min={1}
+                  max={24}
+                  value={mapping.defaults.shiftHours}
+                  onChange={(e) =>
+                    setMapping((m) => ({
+                      ...m,
+                      defaults: { ...m.defaults, shiftHours: Number(e.target.value) || 8 },
+                    }))
+                  }
+                />
+              </Field>
+            )}
+          </div>
+          {problems.length > 0 ? (
+            <div className="mt-4">
+              <Caution title="The mapping is not complete yet" tone="info">
+                <ul className="list-disc pl-5">
+                  {problems.map((p) => (
+                    <li key={p}>{p}</li>
+                  ))}
+                </ul>
+              </Caution>
+            </div>
+          ) : null}
+          <div className="mt-4 flex flex-wrap items-end gap-2">
+            <div className="min-w-64">
+              <Field label="Save this mapping as a template">
+                <Input
+                  value={templateName}
+                  placeholder="e.g. Hollin Vale loader logger"
+                  onChange={(e) => setTemplateName(e.target.value)}
+                />
+              </Field>
+            </div>
+            <Button
+              variant="secondary"
+              disabled={!templateName.trim() || problems.length > 0}
+              busy={saveTemplate.isPending}
+              onClick={() =>
+                saveTemplate.mutate(
+                  { name: templateName.trim(), mapping },
+                  {
+                    onSuccess: (t) => toast.success(`Saved the template "${t.name}".`),
+                    onError: (e) => toast.error(e.message),
+                  },
+                )
+              }
+            >
+              Save template
+            </Button>
+          </div>
+        </Card>
+      ) : null}
+
+      {preview && preview.rows.length > 0 ? (
+        <Card title="3. Name it and import">
+          <div className="grid gap-3 sm:grid-cols-2">
+            <Field label="Duty cycle name">
+              <Input value={name} onChange={(e) => setName(e.target.value)} maxLength={120} />
+            </Field>
+            <Field label="Customer">
+              <Select value={customerId} onChange={(e) => setCustomerId(e.target.value)}>
+                {customers.map((c) => (
+                  <option key={c.id} value={c.id}>
+                    {c.name}
+                  </option>
+                ))}
+              </Select>
+            </Field>
+          </div>
+          {create.error ? (
+            <p role="alert" className="mt-3 text-sm text-danger-700">
+              {create.error.message}
+            </p>
+          ) : null}
+          <div className="mt-4 flex justify-end">
+            <Button
+              disabled={!uploaded || problems.length > 0 || !name.trim() || !customerId}
+              busy={create.isPending}
+              onClick={submit}
+            >
+              {uploaded ? "Import" : "Waiting for the upload…"}
+            </Button>
+          </div>
+        </Card>
+      ) : null}
+    </div>
+  );
+}
