@@ -3,7 +3,11 @@ import { redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getActor } from "@/features/auth/server/get-actor";
 import { DutyCyclesTable } from "@/features/duty-cycles/components/duty-cycles-table";
-import { DEFAULT_DUTY_CYCLE_LIST, dutyCycleKeys } from "@/features/duty-cycles/api/duty-cycles";
+import {
+  DEFAULT_DUTY_CYCLE_LIST,
+  dutyCycleKeys,
+  listQueryOf,
+} from "@/features/duty-cycles/api/duty-cycles";
 import { listDutyCycles } from "@/features/duty-cycles/server/list-duty-cycles";
 import { getDb } from "@/db/client";
 import { can } from "@/lib/authz/policy";
