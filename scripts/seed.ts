@@ -2,10 +2,18 @@
 import { getDb, getPool } from "@/db/client";
 import { seedTenancy } from "@/scripts/seed/tenancy";
 import { seedAccounts } from "@/scripts/seed/accounts";
+import { seedWorkspace } from "@/scripts/seed/workspace";
 
 const db = getDb();
 const tenancy = await seedTenancy(db);
 console.log(`[seed] dealership "${tenancy.dealership.name}" ready`);
 const accounts = await seedAccounts(db, { customers: tenancy.customers });
 console.log(`[seed] ${accounts.count} demo sign-ins ready`);
+const workspace = await seedWorkspace(db, {
+  dealership: tenancy.dealership,
+  adminEmail: "admin@brackenridge.test",
+});
+console.log(
+  `[seed] workspace: ${workspace.machines} demo machines, ${workspace.templates} templates, ${workspace.estimatesAdded} new estimates`,
+);
 await getPool().end();

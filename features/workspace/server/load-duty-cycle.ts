@@ -6,7 +6,7 @@ import type { TActor } from "@/lib/authz/actor";
 import { can } from "@/lib/authz/policy";
 import type { TStraight } from "@/lib/duty-cycles/stored-duty-cycle";
 import { invalidReference } from "@/features/workspace/server/errors";
-import type { TSurfaceMixShares } from "@/features/workspace/lib/fill-surfaces";
+import { toStoredTurn } from "@/features/workspace/lib/estimate-record";
 
 /**
  * Reads a ready duty cycle the actor may see with its stored turns (whose surface may still be
@@ -29,36 +29,6 @@ export async function loadDutyCycleForEstimate(db: DbOrTx, actor: TActor, id: st
     .from(dutyCycleTurns)
     .where(eq(dutyCycleTurns.dutyCycleId, id))
     .orderBy(asc(dutyCycleTurns.seq));
-  const turns = rows.map((r) => ({
-    seq: r.seq,
-    label: r.label,
-    direction: r.direction === "right" ? ("right" as const) : ("left" as const),
-    radius: r.radius,
-    steerInput: r.steerInput,
-    headingChange: r.headingChange,
-    speed: r.speed,
-    perHour: r.perHour,
-    surface: r.surface,
-    loadState: r.loadState === "unladen" ? ("unladen" as const) : ("laden" as const),
-    reverse: r.reverse !== 0,
-    distance: r.distance,
-    duration: r.duration,
-    startTime: r.startTime,
-  }));
+  const turns = rows.map(toStoredTurn);
   return { cycle, turns, straight: (cycle.straight as TStraight | null) ?? null };
-}
-
-/** Straight travel as stored, with the site's mix where the cycle recorded no surfaces. */
-export function straightWithMix(
-  straight: TStraight | null,
-  mix: TSurfaceMixShares | null,
-): TStraight {
-  const hasShares =
-    straight && Object.values(straight.surfaceShares ?? {}).some((v) => (v ?? 0) > 0);
-  return {
-    distancePerHour: straight?.distancePerHour ?? 0,
-    speed: straight?.speed ?? 2,
-    surfaceShares: hasShares ? straight.surfaceShares : (mix ?? { "firm-soil": 1 }),
-    ladenShare: straight?.ladenShare ?? 0,
-  };
 }
