@@ -1,3 +1,5 @@
+import { z } from "zod";
+
 /** What a form's server action returns: shown next to the form, never thrown. */
 export type TActionState = {
   ok: boolean;
@@ -26,4 +28,14 @@ export function firstFieldErrors(
   const out: Record<string, string> = {};
   for (const [key, messages] of Object.entries(fields)) if (messages?.[0]) out[key] = messages[0];
   return out;
+}
+
+/** The answer to a form whose input failed its schema: one message per field. */
+export function invalidInput(error: z.ZodError): TActionState {
+  return {
+    ok: false,
+    code: "invalid_input",
+    message: "Check the highlighted fields.",
+    fieldErrors: firstFieldErrors(z.flattenError(error).fieldErrors as Record<string, string[]>),
+  };
 }

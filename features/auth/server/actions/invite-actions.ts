@@ -8,7 +8,7 @@ import { getDb } from "@/db/client";
 import { ZNewPassword } from "@/features/auth/schemas/sign-in";
 import { ZAcceptInvitationInput } from "@/features/auth/schemas/team";
 import { acceptInvitation } from "@/features/auth/server/accept-invitation";
-import { firstFieldErrors, type TActionState } from "@/features/auth/server/action-state";
+import { invalidInput, type TActionState } from "@/features/auth/server/action-state";
 import { signIn } from "@/features/auth/server/auth-config";
 import { getActor } from "@/features/auth/server/get-actor";
 import { clientIp } from "@/features/auth/server/sign-in-limits";
@@ -39,16 +39,7 @@ export async function acceptInvitationAction(
   const parsed = needsPassword
     ? ZWithPassword.safeParse(raw)
     : ZAcceptInvitationInput.safeParse(raw);
-  if (!parsed.success) {
-    return {
-      ok: false,
-      code: "invalid_input",
-      message: "Check the highlighted fields.",
-      fieldErrors: firstFieldErrors(
-        z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
-      ),
-    };
-  }
+  if (!parsed.success) return invalidInput(parsed.error);
   const password = needsPassword && typeof raw.password === "string" ? raw.password : null;
   const result = await acceptInvitation({
     db: getDb(),

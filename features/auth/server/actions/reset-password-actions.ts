@@ -4,7 +4,7 @@ import { redirect } from "next/navigation";
 import { z } from "zod";
 import { getDb } from "@/db/client";
 import { ZNewPassword } from "@/features/auth/schemas/sign-in";
-import { firstFieldErrors, type TActionState } from "@/features/auth/server/action-state";
+import { invalidInput, type TActionState } from "@/features/auth/server/action-state";
 import { resetPassword } from "@/features/auth/server/password-reset";
 
 const ZReset = z
@@ -24,14 +24,7 @@ export async function resetPasswordAction(
     password: formData.get("password"),
     confirm: formData.get("confirm"),
   });
-  if (!parsed.success) {
-    return {
-      ok: false,
-      code: "invalid_input",
-      message: "Check the highlighted fields.",
-      fieldErrors: firstFieldErrors(parsed.error.flatten().fieldErrors),
-    };
-  }
+  if (!parsed.success) return invalidInput(parsed.error);
   const result = await resetPassword({
     db: getDb(),
     token: parsed.data.token,

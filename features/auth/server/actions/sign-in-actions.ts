@@ -7,7 +7,7 @@ import { getEnv } from "@/lib/env";
 import { signIn } from "@/features/auth/server/auth-config";
 import { ZMagicLinkInput, ZSignInInput } from "@/features/auth/schemas/sign-in";
 import { safeCallbackPath } from "@/features/auth/schemas/callback-url";
-import { firstFieldErrors, type TActionState } from "@/features/auth/server/action-state";
+import { invalidInput, type TActionState } from "@/features/auth/server/action-state";
 import { requestPasswordReset } from "@/features/auth/server/password-reset";
 import { clientIp } from "@/features/auth/server/sign-in-limits";
 import { getMailer } from "@/features/auth/server/mailer";
@@ -25,14 +25,7 @@ export async function signInWithPasswordAction(
     email: formData.get("email"),
     password: formData.get("password"),
   });
-  if (!parsed.success) {
-    return {
-      ok: false,
-      code: "invalid_input",
-      message: "Check the highlighted fields.",
-      fieldErrors: firstFieldErrors(parsed.error.flatten().fieldErrors),
-    };
-  }
+  if (!parsed.success) return invalidInput(parsed.error);
   try {
     await signIn("credentials", {
       ...parsed.data,
@@ -57,14 +50,7 @@ export async function requestMagicLinkAction(
   formData: FormData,
 ): Promise<TActionState> {
   const parsed = ZMagicLinkInput.safeParse({ email: formData.get("email") });
-  if (!parsed.success) {
-    return {
-      ok: false,
-      code: "invalid_input",
-      message: "Check the highlighted field.",
-      fieldErrors: firstFieldErrors(parsed.error.flatten().fieldErrors),
-    };
-  }
+  if (!parsed.success) return invalidInput(parsed.error);
   try {
     await signIn("nodemailer", {
       email: parsed.data.email,
@@ -87,14 +73,7 @@ export async function requestPasswordResetAction(
   formData: FormData,
 ): Promise<TActionState> {
   const parsed = ZMagicLinkInput.safeParse({ email: formData.get("email") });
-  if (!parsed.success) {
-    return {
-      ok: false,
-      code: "invalid_input",
-      message: "Check the highlighted field.",
-      fieldErrors: firstFieldErrors(parsed.error.flatten().fieldErrors),
-    };
-  }
+  if (!parsed.success) return invalidInput(parsed.error);
   const result = await requestPasswordReset({
     db: getDb(),
     mailer: getMailer(),

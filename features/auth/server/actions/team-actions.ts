@@ -6,25 +6,12 @@ import { z } from "zod";
 import { getDb } from "@/db/client";
 import { getEnv } from "@/lib/env";
 import { ZInviteInput, ZRemoveMemberInput, ZSetRolesInput } from "@/features/auth/schemas/team";
-import {
-  firstFieldErrors,
-  SIGNED_OUT,
-  type TActionState,
-} from "@/features/auth/server/action-state";
+import { invalidInput, SIGNED_OUT, type TActionState } from "@/features/auth/server/action-state";
 import { getActor } from "@/features/auth/server/get-actor";
 import { inviteMember } from "@/features/auth/server/invite-member";
 import { getMailer } from "@/features/auth/server/mailer";
 import { clientIp } from "@/features/auth/server/sign-in-limits";
 import { removeMember, revokeInvitation, setMemberRoles } from "@/features/auth/server/team";
-
-function invalid(error: z.ZodError): TActionState {
-  return {
-    ok: false,
-    code: "invalid_input",
-    message: "Check the highlighted fields.",
-    fieldErrors: firstFieldErrors(z.flattenError(error).fieldErrors as Record<string, string[]>),
-  };
-}
 
 /** Dealer admin: invite someone by e-mail with one role. */
 export async function inviteMemberAction(
@@ -38,7 +25,7 @@ export async function inviteMemberAction(
     role: formData.get("role"),
     customerId: formData.get("customerId"),
   });
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidInput(parsed.error);
   const result = await inviteMember({
     db: getDb(),
     mailer: getMailer(),
@@ -81,7 +68,7 @@ export async function setMemberRolesAction(
     userId: formData.get("userId"),
     roles: formData.getAll("roles"),
   });
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidInput(parsed.error);
   const result = await setMemberRoles({ db: getDb(), actor, ...parsed.data });
   if (result.ok) revalidatePath("/team");
   return result;
@@ -94,7 +81,7 @@ export async function removeMemberAction(
   const actor = await getActor();
   if (!actor) return SIGNED_OUT;
   const parsed = ZRemoveMemberInput.safeParse({ userId: formData.get("userId") });
-  if (!parsed.success) return invalid(parsed.error);
+  if (!parsed.success) return invalidInput(parsed.error);
   const result = await removeMember({ db: getDb(), actor, ...parsed.data });
   if (result.ok) revalidatePath("/team");
   return result;
