@@ -1,8 +1,12 @@
 import Link from "next/link";
+import { redirect } from "next/navigation";
+import { getActor } from "@/features/auth/server/get-actor";
 import { AppShell } from "@/lib/ui/app-shell";
 import { EstimateSafetyCaution } from "@/lib/ui/caution";
 
-export default function HomePage() {
+export default async function HomePage() {
+  // A signed-in member lands on their work, not on the product page.
+  if (await getActor()) redirect("/dashboard");
   return (
     <AppShell
       nav={[]}
