@@ -49,6 +49,19 @@ describe("getActorFromRequest", () => {
     expect(await getActorFromRequest(requestAs(wrongSalt, "/api/x"))).toBeNull();
   });
 
+  it("an expired session token is refused", async () => {
+    const m = await createTestMember({ db, roles: ["estimator"] });
+    const expired = await encode({
+      token: { sub: m.user.id, email: m.user.email },
+      secret: getEnv().AUTH_SECRET,
+      salt: "authjs.session-token",
+      maxAge: -60,
+    });
+    expect(
+      await getActorFromRequest(requestAs(`authjs.session-token=${expired}`, "/api/x")),
+    ).toBeNull();
+  });
+
   it("a removed member loses access at once, although the token is still valid", async () => {
     const m = await createTestMember({ db, roles: ["estimator"] });
     expect(await getActorFromRequest(requestAs(m.cookie, "/api/x"))).not.toBeNull();
