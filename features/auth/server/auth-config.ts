@@ -14,7 +14,12 @@ import { getMailer } from "@/features/auth/server/mailer";
 import { magicLinkMail } from "@/features/auth/server/mail-templates";
 import { verifyPassword } from "@/lib/authz/password";
 import { SESSION_MAX_AGE_SECONDS } from "@/features/auth/server/session-cookie";
-import { checkSignInLimits, clientIp } from "@/features/auth/server/sign-in-limits";
+import {
+  checkSignInLimits,
+  clientIp,
+  countFailedPasswordSignIn,
+  isPasswordSignInBlocked,
+} from "@/features/auth/server/sign-in-limits";
 
 /** Thrown when too many attempts came from one address or IP; the form shows a wait message. */
 class RateLimitedSignIn extends CredentialsSignin {
@@ -33,15 +38,16 @@ async function authorizePassword(raw: unknown, request: Request) {
   const { email, password } = parsed.data;
   const db = getDb();
   const ip = clientIp(request?.headers);
-  const limit = await checkSignInLimits(db, { kind: "password", email, ip });
+  const blocked = await isPasswordSignInBlocked(db, { email, ip });
   const user = await findUserByEmail(email);
   const dealershipIds = user ? await dealershipIdsOf(getDb(), user.id) : [];
-  if (!limit.allowed) {
+  if (blocked) {
     await recordAudit(db, { kind: "sign_in_rate_limited", dealershipIds, subject: email, ip });
     throw new RateLimitedSignIn();
   }
   const ok = await verifyPassword(password, user?.passwordHash ?? null);
   if (!user || !ok) {
+    await countFailedPasswordSignIn(db, { email, ip });
     await recordAudit(db, {
       kind: "sign_in_failed",
       dealershipIds,

@@ -1,5 +1,5 @@
 import "server-only";
-import { lt, sql } from "drizzle-orm";
+import { and, eq, lt, sql } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { rateLimitCounters } from "@/db/schema";
 
@@ -36,4 +36,21 @@ export async function hitRateLimit(
     hits,
     retryAfterSeconds: Math.ceil((windowStart.getTime() + windowMs - nowMs) / 1000),
   };
+}
+
+/** Whether `key` has already used up `limit` in the current window, without counting a hit. */
+export async function isRateLimited(
+  db: DbOrTx,
+  opts: { key: string; limit: number; windowSeconds: number; now?: Date },
+): Promise<boolean> {
+  const nowMs = (opts.now ?? new Date()).getTime();
+  const windowMs = opts.windowSeconds * 1000;
+  const windowStart = new Date(Math.floor(nowMs / windowMs) * windowMs);
+  const [row] = await db
+    .select({ hits: rateLimitCounters.hits })
+    .from(rateLimitCounters)
+    .where(
+      and(eq(rateLimitCounters.key, opts.key), eq(rateLimitCounters.windowStart, windowStart)),
+    );
+  return (row?.hits ?? 0) >= opts.limit;
 }

@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { getDb, getPool } from "@/db/client";
-import { hitRateLimit } from "@/features/auth/server/rate-limit";
+import { hitRateLimit, isRateLimited } from "@/features/auth/server/rate-limit";
 import { uniqueTag } from "@/tests/support/session";
 
 const db = getDb();
@@ -37,5 +37,16 @@ describe("rate limit counters in PostgreSQL", () => {
       Array.from({ length: 20 }, (_, i) => i + 1),
     );
     expect(results.filter((r) => r.allowed)).toHaveLength(5);
+  });
+
+  it("isRateLimited reads the count without adding to it", async () => {
+    const key = `test:${uniqueTag()}`;
+    const opts = { key, limit: 2, windowSeconds: 900 };
+    expect(await isRateLimited(db, opts)).toBe(false);
+    expect(await isRateLimited(db, opts)).toBe(false);
+    await hitRateLimit(db, opts);
+    expect(await isRateLimited(db, opts)).toBe(false);
+    await hitRateLimit(db, opts);
+    expect(await isRateLimited(db, opts)).toBe(true);
   });
 });

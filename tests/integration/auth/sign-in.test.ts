@@ -141,6 +141,21 @@ describe("password sign-in through the Auth.js route handler", () => {
   });
 });
 
+describe("successful sign-ins are not counted", () => {
+  it("signing in 12 times from one IP and address stays allowed", async () => {
+    const m = await memberWithPassword("correct horse battery");
+    const ip = uniqueIp();
+    for (let i = 0; i < 12; i++) {
+      const { jar } = await postForm(
+        "/api/auth/callback/credentials",
+        { email: m.user.email, password: "correct horse battery" },
+        ip,
+      );
+      expect(jar.has("authjs.session-token"), `sign-in ${i + 1}`).toBe(true);
+    }
+  });
+});
+
 describe("e-mail link sign-in", () => {
   it("a known address gets a one-time link that signs in; an unknown one gets the same page and no mail", async () => {
     const m = await createTestMember({ db, roles: ["customer"] });
