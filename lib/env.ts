@@ -23,7 +23,7 @@ const ZEnv = z.object({
     .enum(["true", "false"])
     .default("false")
     .transform((v) => v === "true"),
-  /** Sign-in and magic-link attempts allowed per address, and per client IP, per 15 minutes. */
+  /** Failed password sign-ins, and e-mail link or reset requests, allowed per 15 minutes per address and per IP. */
   AUTH_LIMIT_PER_ADDRESS: z.coerce.number().int().positive().default(10),
   AUTH_LIMIT_PER_IP: z.coerce.number().int().positive().default(200),
   MAILBOX_ENABLED: z
