@@ -1,0 +1,145 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import { readFile } from "node:fs/promises";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import Papa from "papaparse";
+import { baseUrl, launchBrowser } from "@/tests/support/browser";
+import { uniqueTag } from "@/tests/support/session";
+import { DEMO_PASSWORD } from "@/scripts/seed/demo-accounts";
+
+// An estimator's day in the workspace: a new customer, a tractor with a track-rod linkage, the
+// customer's turn schedule uploaded, an estimate run, its table read and its turns exported.
+// Invented data throughout.
+const SCHEDULE_CSV = [
+  "label,radius (m),heading change (deg),speed (m/s),count per hour,surface,direction",
+  "Headland U-turn,6,180,1.5,16,firm soil,left",
+  "Headland U-turn,6,180,1.5,16,firm soil,right",
+  "Yard corner,8,90,1.2,6,concrete,left",
+  "=cmd|' /C calc'!A0,12,45,2,2,gravel,right",
+].join("\n");
+
+async function signIn(page: Page, email: string) {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel("E-mail address").first().fill(email);
+  await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
+}
+
+describe("workspace journey", () => {
+  let browser: Browser;
+  let worker: ChildProcess;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    // The duty-cycle import runs in the background worker; start one beside the served app.
+    worker = spawn("node_modules/.bin/tsx", ["scripts/worker.ts"], {
+      env: process.env,
+      stdio: "inherit",
+    });
+  });
+  afterAll(async () => {
+    await browser?.close();
+    worker?.kill("SIGTERM");
+  });
+
+  it("creates a customer and a linkage machine, uploads a duty cycle, runs an estimate and exports its turns", async () => {
+    const tag = uniqueTag();
+    const customerName = `Thornbury Fen Farm ${tag}`;
+    const context = await browser.newContext({ acceptDownloads: true });
+    const page = await context.newPage();
+    await signIn(page, "estimator@brackenridge.test");
+
+    // 1. Customer
+    await page.goto(`${baseUrl}/customers/new`);
+    await page.getByLabel("Name").fill(customerName);
+    await page.getByLabel("Main contact").fill("Perpetua Ashdown");
+    await page.getByRole("button", { name: "Add customer" }).click();
+    await page.waitForURL(/\/customers\/[0-9a-f-]{36}$/);
+    const customerId = page.url().split("/").pop()!;
+    await page.getByRole("heading", { name: customerName }).waitFor();
+
+    // 2. Machine with a track-rod (trapezoid) linkage; the geometry view follows the form.
+    await page.getByRole("link", { name: "Add a machine" }).click();
+    await page.waitForURL(/\/machines\/new/);
+    await page.getByLabel(/^Name/).fill(`Thornbury 120 hp tractor ${tag}`);
+    await page.getByLabel(/^Steering layout/).selectOption("trapezoid");
+    await page.getByLabel(/^Steering arm angle/).fill("18");
+    const sizes = page.getByLabel(/^Tyre size/);
+    await sizes.nth(0).fill("380/85R24");
+    await sizes.nth(1).fill("460/85R34");
+    await page.getByText(/Reads as 460 mm wide/).waitFor();
+    await page.getByTestId("percent-ackermann").waitFor();
+    expect(await page.getByTestId("percent-ackermann").textContent()).toMatch(/^\d+ %$/);
+    await page.getByRole("button", { name: "Add machine" }).click();
+    await page.waitForURL(/\/machines\/[0-9a-f-]{36}$/);
+    const machineId = page.url().split("/").pop()!;
+
+    // 3. Duty cycle: the customer's turn schedule through the upload page.
+    await page.goto(`${baseUrl}/duty-cycles/upload`);
+    await page.getByLabel("CSV file").setInputFiles({
+      name: "thornbury-schedule.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from(SCHEDULE_CSV),
+    });
+    await page.getByLabel("What the file holds").selectOption("schedule");
+    await page.getByLabel("Duty cycle name").fill(`Spring drilling ${tag}`);
+    await page.getByLabel("Customer", { exact: true }).selectOption({ label: customerName });
+    await page.getByRole("button", { name: "Import" }).click();
+    await page.waitForURL(/\/duty-cycles\/[0-9a-f-]{36}$/, { timeout: 30_000 });
+    const dutyCycleId = page.url().split("/").pop()!;
+    await expect
+      .poll(
+        async () =>
+          (
+            (await (
+              await page.request.get(`${baseUrl}/api/v1/duty-cycles/${dutyCycleId}`)
+            ).json()) as { status: string }
+          ).status,
+        { timeout: 30_000, interval: 500 },
+      )
+      .toBe("ready");
+
+    // 4. Estimate
+    await page.goto(`${baseUrl}/estimates/new?customerId=${customerId}&machineId=${machineId}`);
+    await page.getByLabel("Duty cycle").selectOption({ label: `Spring drilling ${tag}` });
+    await page.getByRole("button", { name: "Run estimate" }).click();
+    await page.waitForURL(/\/estimates\/[0-9a-f-]{36}$/, { timeout: 30_000 });
+
+    // 5. Read the per-position table.
+    const table = page.getByTestId("positions-table");
+    await table.waitFor();
+    const rows = table.locator("tbody tr");
+    expect(await rows.count()).toBe(4);
+    const positions = await rows.locator("th").allTextContents();
+    expect(positions.map((p) => p.replace("wears first", "").trim())).toEqual([
+      "Front left",
+      "Front right",
+      "Rear left",
+      "Rear right",
+    ]);
+    expect(await table.getByText("wears first").count()).toBe(1);
+    const hours = Number(
+      (await rows.first().locator("td").nth(4).textContent())!.replace(/,/g, ""),
+    );
+    expect(hours).toBeGreaterThan(0);
+    expect(await page.getByText("Estimates only: not load, pressure or speed advice").count()).toBe(
+      1,
+    );
+
+    // 6. Export the turns as CSV.
+    const [download] = await Promise.all([
+      page.waitForEvent("download"),
+      page.getByRole("link", { name: "Download turns (CSV)" }).click(),
+    ]);
+    const text = await readFile((await download.path())!, "utf8");
+    const parsed = Papa.parse<Record<string, string>>(text.trim(), { header: true }).data;
+    expect(parsed.length).toBe(4 * 4); // four turn kinds, four wheels each
+    expect(new Set(parsed.map((r) => r.position))).toEqual(
+      new Set(["front-left", "front-right", "rear-left", "rear-right"]),
+    );
+    // The spreadsheet-formula label comes back as inert text.
+    expect(parsed.some((r) => r.label!.startsWith("'=cmd"))).toBe(true);
+    expect(parsed.every((r) => !r.label!.startsWith("="))).toBe(true);
+    await context.close();
+  });
+});
