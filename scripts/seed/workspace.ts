@@ -129,8 +129,10 @@ export async function seedWorkspace(
   const [admin] = await db.select().from(users).where(eq(users.email, opts.adminEmail));
   if (!admin) throw new Error(`seed the demo accounts first: ${opts.adminEmail} is missing`);
 
+  const kindOf = (name: string) =>
+    Object.values(OWNERS).find((o) => o.customer === name)?.customerKind ?? "farm";
   for (const [customerName, list] of Object.entries(SITES)) {
-    const customer = await upsertCustomer(db, dealershipId, customerName, "farm");
+    const customer = await upsertCustomer(db, dealershipId, customerName, kindOf(customerName));
     for (const s of list) {
       const [found] = await db
         .select()

@@ -236,7 +236,7 @@ export function ServerDataTable<T>({
               </p>
               <div className="flex items-center gap-2">
                 <label className="flex items-center gap-2">
-                  <span>Rows per page</span>
+                  <span className="whitespace-nowrap">Rows per page</span>
                   <Select
                     className="h-9 w-20"
                     value={state.pageSize}
