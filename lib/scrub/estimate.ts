@@ -17,6 +17,7 @@ import {
   ZDutyCycle,
   ZEstimateOptions,
   ZMachine,
+  ZTurnKind,
   type TDutyCycleInput,
   type TEstimateOptions,
   type TEstimateResult,
@@ -30,6 +31,7 @@ import {
   type TWheelTurnResult,
 } from "./schemas";
 import {
+  copyUnitTurn,
   FIELDS,
   F_DISTANCE,
   F_LAT_ENERGY,
@@ -48,6 +50,8 @@ import { ENGINE_VERSION } from "./version";
 import { solveWindUp } from "./wind-up";
 
 const CACHE_LIMIT = 4096;
+/** Duty cycle with its turn kinds left unparsed (validated one at a time in the loop). */
+const ZDutyCycleShell = ZDutyCycle.extend({ turns: z.array(z.unknown()) });
 const NO_WHEELS: TWheelTurnResult[] = [];
 Object.freeze(NO_WHEELS);
 const POSITIONS: readonly TPosition[] = ["front-left", "front-right", "rear-left", "rear-right"];
@@ -96,7 +100,10 @@ export function estimate(
   optionsInput: TEstimateOptions = {},
 ): TEstimateResult {
   const machine = parseOrExplain(ZMachine, machineInput, "Machine");
-  const dutyCycle = parseOrExplain(ZDutyCycle, dutyCycleInput, "Duty cycle");
+  // Turn kinds are validated one by one inside the loop: a million parsed copies held at once
+  // would triple the live heap (and the garbage collector's work) for large imports.
+  const dutyCycle = parseOrExplain(ZDutyCycleShell, dutyCycleInput, "Duty cycle");
+  const turnProblems: string[] = [];
   const options = parseOrExplain(ZEstimateOptions, optionsInput, "Estimate options");
   const pm = prepareMachine(machine);
   const surfaces = resolveSurfaces(dutyCycle.surfaces);
@@ -128,16 +135,27 @@ export function estimate(
 
   const cache = new TurnCache();
   const turns: TTurnResult[] = new Array(dutyCycle.turns.length);
-  dutyCycle.turns.forEach((kind, index) => {
+  dutyCycle.turns.forEach((raw, index) => {
+    const parsed = ZTurnKind.safeParse(raw);
+    if (!parsed.success) {
+      if (turnProblems.length < 10) {
+        turnProblems.push(`turns[${index}]: ${z.prettifyError(parsed.error)}`);
+      } else turnProblems.push("");
+      return;
+    }
+    const kind = parsed.data;
     const turn = kind.turn;
     const layout = turn.steeringMode ?? pm.defaultLayout;
-    let unit = cache.get(layout, turn);
-    if (unit === undefined) {
-      const mode = pm.modes.get(layout);
-      unit = mode ? solveUnitTurn(pm, mode, turn, contextFor(turn.surface)) : null;
-      cache.set(layout, turn, unit);
+    const mode = pm.modes.get(layout);
+    let unit: UnitTurn | null = null;
+    if (mode) {
+      unit = cache.lookup(layout, turn) ?? null;
+      if (unit === null) {
+        unit = solveUnitTurn(pm, mode, turn, contextFor(turn.surface));
+        cache.store(unit);
+      }
     }
-    const label = turn.label ?? `Turn ${index + 1} (${turn.direction})`;
+    const label = turn.label ?? (turn.direction === "left" ? "left turn" : "right turn");
     if (unit === null) {
       warnings.push({
         code: "steering-mode-missing",
@@ -188,6 +206,14 @@ export function estimate(
     }
   });
 
+  if (turnProblems.length > 0) {
+    const shown = turnProblems.filter((p) => p !== "");
+    const more = turnProblems.length - shown.length;
+    throw new Error(
+      `Duty cycle is invalid:\n${shown.join("\n")}${more > 0 ? `\n…and ${more} more invalid turns` : ""}`,
+    );
+  }
+
   addStraightTravel(pm, dutyCycle.straight, lead, surfaces, coefficients, acc);
 
   const positions = wearByPosition(pm, acc, surfaces, coefficients);
@@ -232,39 +258,74 @@ function isTracked(pm: PreparedMachine): boolean {
   return pm.machine.steering.layout === "skid" && pm.machine.steering.running === "tracked";
 }
 
+const LAYOUT_CODES = new Map<string, number>(
+  [
+    "ideal",
+    "trapezoid",
+    "parallel",
+    "turntable",
+    "articulated",
+    "rear",
+    "four-wheel",
+    "crab",
+    "skid",
+  ].map((l, i) => [l, i]),
+);
+
 /**
  * Solved turns keyed by everything that changes the solve (not heading change, count, crab
- * distance or label: results scale linearly with those). Numbers stay numbers (no string
- * conversion); bounded, since a miss only re-solves deterministically to the same result.
+ * distance or label: results scale linearly with those). Direct-mapped and fixed-size, with the
+ * full key compared exactly: a collision or eviction only re-solves, deterministically, to the
+ * same result, so memory stays flat for huge imported duty cycles without strings or maps.
  */
 class TurnCache {
-  private byKind = new Map<string, Map<number, Map<number, UnitTurn | null>>>();
-  private size = 0;
+  private readonly codes = new Int32Array(CACHE_LIMIT).fill(-1);
+  private readonly sizes = new Float64Array(CACHE_LIMIT);
+  private readonly speeds = new Float64Array(CACHE_LIMIT);
+  private readonly units: (UnitTurn | undefined)[] = new Array<UnitTurn | undefined>(
+    CACHE_LIMIT,
+  ).fill(undefined);
+  private readonly bits = new Float64Array(2);
+  private readonly words = new Uint32Array(this.bits.buffer);
+  private index = 0;
+  private seen = false;
 
-  private kind(layout: string, t: TTurn): string {
-    return `${layout}|${t.direction}|${t.radius === undefined ? "s" : "r"}|${t.surface}|${t.loadState}|${t.frontDrive}|${t.differentialLock ? 1 : 0}`;
+  private code(layout: string, t: TTurn): number {
+    let c = LAYOUT_CODES.get(layout) ?? 15;
+    c = c * 2 + (t.direction === "left" ? 0 : 1);
+    c = c * 2 + (t.radius === undefined ? 0 : 1);
+    c = c * 8 + (SURFACE_INDEX.get(t.surface) ?? 7);
+    c = c * 2 + (t.loadState === "laden" ? 1 : 0);
+    c = c * 2 + (t.frontDrive === "engaged" ? 1 : 0);
+    return c * 2 + (t.differentialLock ? 1 : 0);
   }
 
-  get(layout: string, t: TTurn): UnitTurn | null | undefined {
-    return this.byKind
-      .get(this.kind(layout, t))
-      ?.get(t.radius ?? t.steerInput ?? 0)
-      ?.get(t.speed);
-  }
-
-  set(layout: string, t: TTurn, unit: UnitTurn | null): void {
-    if (this.size >= CACHE_LIMIT) {
-      this.byKind.clear();
-      this.size = 0;
-    }
-    const k = this.kind(layout, t);
-    let bySize = this.byKind.get(k);
-    if (!bySize) this.byKind.set(k, (bySize = new Map()));
+  /**
+   * The cached solve for this turn, or undefined. Remembers the slot for {@link store}; a turn
+   * is kept only from its second occurrence on, so all-distinct imports allocate nothing here.
+   */
+  lookup(layout: string, t: TTurn): UnitTurn | undefined {
+    const code = this.code(layout, t);
     const size = t.radius ?? t.steerInput ?? 0;
-    let bySpeed = bySize.get(size);
-    if (!bySpeed) bySize.set(size, (bySpeed = new Map()));
-    bySpeed.set(t.speed, unit);
-    this.size++;
+    this.bits[0] = size;
+    this.bits[1] = t.speed;
+    const w = this.words;
+    let h = Math.imul(code + 0x9e3779b9, 0x85ebca6b);
+    for (let i = 0; i < 4; i++) h = Math.imul(h ^ (w[i] as number), 0xc2b2ae35) ^ (h >>> 15);
+    const i = (h >>> 0) % CACHE_LIMIT;
+    this.index = i;
+    this.seen = this.codes[i] === code && this.sizes[i] === size && this.speeds[i] === t.speed;
+    if (this.seen) return this.units[i];
+    this.codes[i] = code;
+    this.sizes[i] = size;
+    this.speeds[i] = t.speed;
+    this.units[i] = undefined;
+    return undefined;
+  }
+
+  /** After a miss: keep a copy if this turn kind was seen before. */
+  store(unit: UnitTurn): void {
+    if (this.seen) this.units[this.index] = copyUnitTurn(unit);
   }
 }
 
@@ -334,7 +395,8 @@ function turnResult(
     steeringMode: unit.layout,
     radius: unit.radius,
     steerInput: unit.steerInput,
-    turningCentre: unit.feasible ? unit.centre : null,
+    turningCentre:
+      unit.feasible && Number.isFinite(unit.centreX) ? { x: unit.centreX, y: unit.centreY } : null,
     turningDiameter: unit.feasible ? unit.turningDiameter : null,
     lateralAcceleration: unit.lateralAcceleration,
     effectiveLead: unit.effectiveLead,

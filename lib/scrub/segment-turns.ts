@@ -101,11 +101,17 @@ type Step = {
   laden?: boolean;
   /** First step after a gap or the start of the log. */
   restart: boolean;
+  /** Smoothed yaw rate, filled in when the step is classified (deg/s). */
+  rate: number;
 };
 
 /** Turns raw samples into heading and distance increments, one source picked per sample. */
 class HeadingTracker {
-  private prev: TTurnSample | undefined;
+  // The previous sample, as plain fields: samples may be reused by the caller.
+  private hasPrev = false;
+  private prevT = 0;
+  private prevSpeed = 0;
+  private prevRate: number | undefined;
   private prevPsi: number | undefined;
   private anchor: { x: number; y: number; reverse: boolean } | undefined;
   private gpsPsi: number | undefined;
@@ -156,7 +162,8 @@ class HeadingTracker {
   }
 
   reset() {
-    this.prev = undefined;
+    this.hasPrev = false;
+    this.prevRate = undefined;
     this.prevPsi = undefined;
     this.anchor = undefined;
     this.gpsPsi = undefined;
@@ -165,47 +172,33 @@ class HeadingTracker {
   step(s: TTurnSample): Step {
     const reverse = s.reverse ?? s.speed < 0;
     const speed = reverse ? -Math.abs(s.speed) : Math.abs(s.speed);
-    const prev = this.prev;
-    let restart = false;
-    if (prev && (s.t - prev.t > this.o.maxGap || s.t <= prev.t)) {
+    let restart = !this.hasPrev;
+    if (this.hasPrev && (s.t - this.prevT > this.o.maxGap || s.t <= this.prevT)) {
       this.reset();
       restart = true;
     }
-    const before = this.prev;
-    // Absolute heading (compass, then GPS), left positive and unwrapped.
-    let psi: number | undefined;
-    if (s.heading !== undefined && Number.isFinite(s.heading)) {
-      const h = -s.heading;
-      psi = this.prevPsi === undefined ? h : this.prevPsi + wrapDegrees(h - this.prevPsi);
-    } else {
-      psi = this.gpsHeading(s, speed, reverse);
-    }
     const rate = this.rateOf(s, speed);
-    this.prev = { ...s, speed };
-    if (!before) {
-      this.prevPsi = psi;
-      return {
-        t: s.t,
-        dt: 0,
-        dPsi: 0,
-        ds: 0,
-        dsReverse: 0,
-        speed,
-        surface: s.surface,
-        laden: s.laden,
-        restart: true,
-      };
-    }
-    const dt = s.t - before.t;
+    // Absolute heading (compass, then GPS), left positive and unwrapped; only needed when
+    // the sample has no rate source.
+    let psi: number | undefined;
+    if (rate === undefined) {
+      if (s.heading !== undefined && Number.isFinite(s.heading)) {
+        const h = -s.heading;
+        psi = this.prevPsi === undefined ? h : this.prevPsi + wrapDegrees(h - this.prevPsi);
+      } else psi = this.gpsHeading(s, speed, reverse);
+    } else this.anchor = undefined;
+    const dt = restart ? 0 : s.t - this.prevT;
     let dPsi = 0;
-    if (rate !== undefined) {
-      const prevRate = this.rateOf(before, before.speed) ?? rate;
-      dPsi = ((prevRate + rate) / 2) * dt;
-    } else if (psi !== undefined && this.prevPsi !== undefined) {
-      dPsi = psi - this.prevPsi;
+    if (!restart) {
+      if (rate !== undefined) dPsi = ((this.prevRate ?? rate) + rate) * 0.5 * dt;
+      else if (psi !== undefined && this.prevPsi !== undefined) dPsi = psi - this.prevPsi;
     }
+    const ds = restart ? 0 : (Math.abs(this.prevSpeed) + Math.abs(speed)) * 0.5 * dt;
+    this.hasPrev = true;
+    this.prevT = s.t;
+    this.prevSpeed = speed;
+    this.prevRate = rate;
     this.prevPsi = psi;
-    const ds = ((Math.abs(before.speed) + Math.abs(speed)) / 2) * dt;
     return {
       t: s.t,
       dt,
@@ -216,12 +209,19 @@ class HeadingTracker {
       surface: s.surface,
       laden: s.laden,
       restart,
+      rate: 0,
     };
   }
 }
 
-/** A step inside an open turn, with its smoothed yaw rate (deg/s). */
-type TurnStep = Step & { rate: number };
+/** A step inside an open turn, with its smoothed yaw rate. */
+type TurnStep = Step;
+
+/** Records the smoothed rate on the step itself (no copy per sample: this runs for every row). */
+function withRate(step: Step, rate: number): TurnStep {
+  step.rate = rate;
+  return step;
+}
 
 type OpenTurn = {
   sign: number;
@@ -308,7 +308,7 @@ export function createTurnSegmenter(options: TSegmentOptions = {}): TTurnSegment
     const sign = Math.sign(rate);
     if (open) {
       if (turning && sign === open.sign) {
-        open.steps.push({ ...step, rate });
+        open.steps.push(withRate(step, rate));
         open.activeLen = open.steps.length;
         open.quietSince = undefined;
         return;
@@ -316,7 +316,7 @@ export function createTurnSegmenter(options: TSegmentOptions = {}): TTurnSegment
       if (!turning) {
         open.quietSince ??= open.steps[open.activeLen - 1]!.t;
         if (step.t - open.quietSince <= o.mergeGap) {
-          open.steps.push({ ...step, rate });
+          open.steps.push(withRate(step, rate));
           return;
         }
       }
@@ -324,7 +324,7 @@ export function createTurnSegmenter(options: TSegmentOptions = {}): TTurnSegment
       open = undefined;
     }
     if (turning && step.dt > 0) {
-      open = { sign, steps: [{ ...step, rate }], activeLen: 1, quietSince: undefined };
+      open = { sign, steps: [withRate(step, rate)], activeLen: 1, quietSince: undefined };
     }
   }
 

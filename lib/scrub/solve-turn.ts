@@ -40,7 +40,9 @@ export interface UnitTurn {
   layout: PreparedMode["layout"];
   radius: number;
   steerInput: number;
-  centre: { x: number; y: number } | null;
+  /** Turning centre in the body frame (m); NaN when there is none (crab, infeasible). */
+  centreX: number;
+  centreY: number;
   turningDiameter: number | null;
   lateralAcceleration: number;
   effectiveLead: number | null;
@@ -77,21 +79,57 @@ function infeasible(
   code: TWarningCode,
   message: string,
 ): UnitTurn {
-  return {
-    feasible: false,
-    problem: { code, message },
-    perUnit: "radian",
-    layout: mode.layout,
-    radius,
-    steerInput,
-    centre: null,
-    turningDiameter: null,
-    lateralAcceleration: 0,
-    effectiveLead: null,
-    turningMoment: null,
-    converged: true,
-    wheels: newWheelFields(),
-  };
+  const result = resetScratch(mode, "radian");
+  result.feasible = false;
+  result.problem = { code, message };
+  result.radius = radius;
+  result.steerInput = steerInput;
+  return result;
+}
+
+/**
+ * The solvers write into one reusable result (no allocation per solve): callers use it before
+ * the next solve, or keep a {@link copyUnitTurn}.
+ */
+const SCRATCH: UnitTurn = {
+  feasible: true,
+  problem: null,
+  perUnit: "radian",
+  layout: "ideal",
+  radius: NaN,
+  steerInput: NaN,
+  centreX: NaN,
+  centreY: NaN,
+  turningDiameter: null,
+  lateralAcceleration: 0,
+  effectiveLead: null,
+  turningMoment: null,
+  converged: true,
+  wheels: newWheelFields(),
+};
+
+function resetScratch(mode: PreparedMode, perUnit: "radian" | "metre"): UnitTurn {
+  const r = SCRATCH;
+  r.feasible = true;
+  r.problem = null;
+  r.perUnit = perUnit;
+  r.layout = mode.layout;
+  r.radius = NaN;
+  r.steerInput = NaN;
+  r.centreX = NaN;
+  r.centreY = NaN;
+  r.turningDiameter = null;
+  r.lateralAcceleration = 0;
+  r.effectiveLead = null;
+  r.turningMoment = null;
+  r.converged = true;
+  const w = r.wheels;
+  for (let i = 0; i < w.length; i++) w[i] = 0;
+  return r;
+}
+
+export function copyUnitTurn(u: UnitTurn): UnitTurn {
+  return { ...u, wheels: u.wheels.slice() };
 }
 
 /** Wheel loads (N) in the solved (left-turn) frame: mirrored for right turns. */
@@ -219,7 +257,8 @@ export function solveUnitTurn(
   const result = collect(pm, mode, turn, ctx, mirrored, 1 / Math.abs(state.r), "radian");
   result.radius = radius;
   result.steerInput = toDegrees(input);
-  result.centre = { x: -state.v / state.r, y: (mirrored ? -1 : 1) * (u / state.r) };
+  result.centreX = -state.v / state.r;
+  result.centreY = (mirrored ? -1 : 1) * (u / state.r);
   result.lateralAcceleration = moving ? turn.speed * turn.speed * state.r : 0;
   result.converged = state.converged;
   return checkTurningRadius(pm, result);
@@ -229,13 +268,10 @@ function checkTurningRadius(pm: PreparedMachine, result: UnitTurn): UnitTurn {
   const limit = pm.machine.limits.minTurningRadius;
   if (limit !== undefined && result.turningDiameter !== null) {
     if (result.turningDiameter / 2 < limit - 1e-9) {
-      return {
-        ...result,
-        feasible: false,
-        problem: {
-          code: "radius-infeasible",
-          message: `Outer tyre path radius ${(result.turningDiameter / 2).toFixed(2)} m is tighter than the machine's minimum turning radius ${limit} m.`,
-        },
+      result.feasible = false;
+      result.problem = {
+        code: "radius-infeasible",
+        message: `Outer tyre path radius ${(result.turningDiameter / 2).toFixed(2)} m is tighter than the machine's minimum turning radius ${limit} m.`,
       };
     }
   }
@@ -257,7 +293,8 @@ function collect(
   perUnit: "radian" | "metre",
 ): UnitTurn {
   const w = mode.wheels;
-  const out = newWheelFields();
+  const result = resetScratch(mode, perUnit);
+  const out = result.wheels;
   let maxPath = 0;
   for (let i = 0; i < 4; i++) {
     const o = slot(i, mirrored);
@@ -273,21 +310,8 @@ function collect(
     out[o + F_LAT_ENERGY] = Math.abs(w.force[i] as number) * lateral;
     out[o + F_DISTANCE] = rolling;
   }
-  const result: UnitTurn = {
-    feasible: true,
-    problem: null,
-    perUnit,
-    layout: mode.layout,
-    radius: NaN,
-    steerInput: NaN,
-    centre: null,
-    turningDiameter: perUnit === "radian" ? 2 * maxPath : null,
-    lateralAcceleration: 0,
-    effectiveLead: null,
-    turningMoment: null,
-    converged: true,
-    wheels: out,
-  };
+  result.turningDiameter = perUnit === "radian" ? 2 * maxPath : null;
+
   addLongitudinal(pm, turn, ctx, mirrored, result);
   return result;
 }
@@ -437,7 +461,8 @@ function articulatedTurn(
   const result = collect(pm, mode, turn, ctx, mirrored, 1, "radian");
   result.radius = radii.rear;
   result.steerInput = toDegrees(gamma);
-  result.centre = { x: 0, y: (mirrored ? -1 : 1) * radii.rear };
+  result.centreX = 0;
+  result.centreY = (mirrored ? -1 : 1) * radii.rear;
   result.lateralAcceleration = mass > 0 ? turn.speed ** 2 / radii.rear : 0;
   return checkTurningRadius(pm, result);
 }
@@ -551,7 +576,8 @@ function skidTurn(
   }
   result.radius = radius;
   result.steerInput = 0;
-  result.centre = { x: -state.v / r, y: (mirrored ? -1 : 1) * (u / r) };
+  result.centreX = -state.v / r;
+  result.centreY = (mirrored ? -1 : 1) * (u / r);
   result.lateralAcceleration = speed * speed * u * r;
   result.turningMoment = moment;
   result.converged = state.converged;

@@ -31,19 +31,28 @@ export function newSolveState(): SolveState {
 const MAX_ITERATIONS = 40;
 const TOLERANCE = 1e-10;
 
-// Scratch: residuals g1 (N), g2 (N·m) and partial derivatives.
-let g1 = 0;
-let g2 = 0;
-let g1v = 0;
-let g2v = 0;
-let g1r = 0;
-let g2r = 0;
-let g1p = 0;
-let g2p = 0;
+// Scratch: residuals g1 (N), g2 (N·m) and partial derivatives, in a typed array (doubles held
+// in module-level `let`s would be boxed on every write and flood the young generation).
+const S = new Float64Array(8);
+const G1 = 0;
+const G2 = 1;
+const G1V = 2;
+const G2V = 3;
+const G1R = 4;
+const G2R = 5;
+const G1P = 6;
+const G2P = 7;
 
 /** Evaluate tyre forces and the tyre parts of residuals and Jacobian at (u, v, r). */
 function assemble(w: WheelSet, u: number, v: number, r: number, withSteer: boolean): void {
-  g1 = g2 = g1v = g2v = g1r = g2r = g1p = g2p = 0;
+  let g1 = 0;
+  let g2 = 0;
+  let g1v = 0;
+  let g2v = 0;
+  let g1r = 0;
+  let g2r = 0;
+  let g1p = 0;
+  let g2p = 0;
   const n = w.count;
   const floor = 1e-9 * (Math.abs(u) + Math.abs(v) + 1e-3);
   for (let i = 0; i < n; i++) {
@@ -107,6 +116,14 @@ function assemble(w: WheelSet, u: number, v: number, r: number, withSteer: boole
       }
     }
   }
+  S[G1] = g1;
+  S[G2] = g2;
+  S[G1V] = g1v;
+  S[G2V] = g2v;
+  S[G1R] = g1r;
+  S[G2R] = g2r;
+  S[G1P] = g1p;
+  S[G2P] = g2p;
 }
 
 /**
@@ -128,18 +145,18 @@ export function solveFixedSteer(
   let it = 0;
   let converged = false;
   for (; it < MAX_ITERATIONS; it++) {
-    if (Math.abs(g1) < TOLERANCE * scale && Math.abs(g2) < TOLERANCE * scale * lever) {
+    if (Math.abs(S[G1]!) < TOLERANCE * scale && Math.abs(S[G2]!) < TOLERANCE * scale * lever) {
       converged = true;
       break;
     }
-    const a11 = g1v;
-    const a12 = g1r - mass * u;
-    const a21 = g2v;
-    const a22 = g2r - mass * u * xcg;
+    const a11 = S[G1V]!;
+    const a12 = S[G1R]! - mass * u;
+    const a21 = S[G2V]!;
+    const a22 = S[G2R]! - mass * u * xcg;
     const det = a11 * a22 - a12 * a21;
     if (!Number.isFinite(det) || det === 0) break;
-    let dv = -(a22 * g1 - a12 * g2) / det;
-    let dr = -(-a21 * g1 + a11 * g2) / det;
+    let dv = -(a22 * S[G1]! - a12 * S[G2]!) / det;
+    let dr = -(-a21 * S[G1]! + a11 * S[G2]!) / det;
     let accepted = false;
     for (let k = 0; k < 12; k++) {
       const trial = residualFixed(w, u, v + dv, r + dr, mass, xcg, lever);
@@ -175,10 +192,10 @@ function residualFixed(
   lever: number,
 ): number {
   assemble(w, u, v, r, false);
-  g1 -= mass * u * r;
-  g2 -= mass * u * r * xcg;
-  const b = g2 / lever;
-  return g1 * g1 + b * b;
+  S[G1] = S[G1]! - mass * u * r;
+  S[G2] = S[G2]! - mass * u * r * xcg;
+  const b = S[G2]! / lever;
+  return S[G1]! * S[G1]! + b * b;
 }
 
 /**
@@ -202,20 +219,20 @@ export function solveAtRadius(
   let it = 0;
   let converged = false;
   for (; it < MAX_ITERATIONS && Number.isFinite(norm); it++) {
-    if (Math.abs(g1) < TOLERANCE * scale && Math.abs(g2) < TOLERANCE * scale * lever) {
+    if (Math.abs(S[G1]!) < TOLERANCE * scale && Math.abs(S[G2]!) < TOLERANCE * scale * lever) {
       converged = true;
       break;
     }
     const speed = Math.sqrt(u * u + v * v);
     const drdv = v / (radius * speed);
-    const a11 = g1v + g1r * drdv - mass * u * drdv;
-    const a12 = g1p;
-    const a21 = g2v + g2r * drdv - mass * u * drdv * xcg;
-    const a22 = g2p;
+    const a11 = S[G1V]! + S[G1R]! * drdv - mass * u * drdv;
+    const a12 = S[G1P]!;
+    const a21 = S[G2V]! + S[G2R]! * drdv - mass * u * drdv * xcg;
+    const a22 = S[G2P]!;
     const det = a11 * a22 - a12 * a21;
     if (!Number.isFinite(det) || det === 0) break;
-    let dv = -(a22 * g1 - a12 * g2) / det;
-    let dp = -(-a21 * g1 + a11 * g2) / det;
+    let dv = -(a22 * S[G1]! - a12 * S[G2]!) / det;
+    let dp = -(-a21 * S[G1]! + a11 * S[G2]!) / det;
     // Keep steps physical: steering input moves at most 0.2 rad per iteration.
     if (Math.abs(dp) > 0.2) {
       const f = 0.2 / Math.abs(dp);
@@ -262,10 +279,10 @@ function residualRadius(
   if (!map.apply(p, w)) return Infinity;
   const r = Math.sqrt(u * u + v * v) / radius;
   assemble(w, u, v, r, true);
-  g1 -= mass * u * r;
-  g2 -= mass * u * r * xcg;
-  const b = g2 / lever;
-  return g1 * g1 + b * b;
+  S[G1] = S[G1]! - mass * u * r;
+  S[G2] = S[G2]! - mass * u * r * xcg;
+  const b = S[G2]! / lever;
+  return S[G1]! * S[G1]! + b * b;
 }
 
 /**
@@ -330,7 +347,7 @@ export function solveLateral(
     }
     if (g > 0) lo = v;
     else hi = v;
-    const newton = g1v < 0 ? v - g / g1v : NaN;
+    const newton = S[G1V]! < 0 ? v - g / S[G1V]! : NaN;
     v = newton > lo && newton < hi ? newton : (lo + hi) / 2;
   }
   finish(state, u, v, r, converged, it);
@@ -338,7 +355,7 @@ export function solveLateral(
 
 function lateralResidual(w: WheelSet, u: number, v: number, r: number, target: number): number {
   assemble(w, u, v, r, false);
-  return g1 - target;
+  return S[G1]! - target;
 }
 
 function finish(
