@@ -4,7 +4,7 @@ import { AuthFrame } from "@/features/auth/components/auth-frame";
 import { SignInPanel } from "@/features/auth/components/sign-in-panel";
 import { signInNotice } from "@/features/auth/schemas/sign-in-notice";
 import { safeCallbackPath } from "@/features/auth/schemas/callback-url";
-import { getActor } from "@/features/auth/server/get-actor";
+import { getActor, hasValidSession } from "@/features/auth/server/get-actor";
 
 export const metadata: Metadata = { title: "Sign in" };
 
@@ -16,9 +16,16 @@ export default async function SignInPage({
   const params = await searchParams;
   const callbackUrl = safeCallbackPath(params.callbackUrl);
   if (await getActor()) redirect(callbackUrl);
+  // Signed in, but no longer a member of any dealership (removed since signing in).
+  const notice = (await hasValidSession())
+    ? {
+        ok: false,
+        text: "Your account is not a member of any dealership now. Ask a dealer admin to invite you again.",
+      }
+    : signInNotice(params);
   return (
     <AuthFrame title="Sign in to Treadcast">
-      <SignInPanel callbackUrl={callbackUrl} notice={signInNotice(params)} />
+      <SignInPanel callbackUrl={callbackUrl} notice={notice} />
     </AuthFrame>
   );
 }

@@ -105,9 +105,18 @@ function buildConfig(): NextAuthConfig {
         async sendVerificationRequest({ identifier, url, request }) {
           const ip = clientIp(request?.headers);
           const limit = await checkSignInLimits(db, { kind: "magic-link", email: identifier, ip });
-          if (!limit.allowed) throw new Error("Too many sign-in links requested");
           // Links go only to existing accounts; the page says the same thing either way.
           const user = await findUserByEmail(identifier);
+          if (!limit.allowed) {
+            await recordAudit(db, {
+              kind: "sign_in_rate_limited",
+              dealershipIds: user ? await dealershipIdsOf(db, user.id) : [],
+              subject: identifier,
+              detail: { method: "magic-link" },
+              ip,
+            });
+            throw new Error("Too many sign-in links requested");
+          }
           if (!user) return;
           await recordAudit(db, {
             kind: "magic_link_requested",

@@ -18,3 +18,9 @@ export const getActor = cache(async (): Promise<TActor | null> => {
   const claims = await readSessionClaims(new Map(jar.getAll().map((c) => [c.name, c.value])));
   return claims ? loadActor(getDb(), claims) : null;
 });
+
+/** Whether the request carries a valid session, even one whose user is no longer a member. */
+export async function hasValidSession(): Promise<boolean> {
+  const jar = await cookies();
+  return Boolean(await readSessionClaims(new Map(jar.getAll().map((c) => [c.name, c.value]))));
+}
