@@ -99,9 +99,41 @@ export function createTelematicsImporter(
   function optionalNumber(fields: readonly string[], r: Reader | undefined): number | undefined {
     if (!r) return undefined;
     const cell = fields[r.ref.index]!;
-    if (cell.trim() === "") return undefined;
-    return toSi(parseDecimal(cell, decimal), r.ref.unit);
+    if (cell.length === 0) return undefined;
+    const n = parseDecimal(cell, decimal);
+    if (Number.isNaN(n) && cell.trim() === "") return undefined;
+    return toSi(n, r.ref.unit);
   }
+
+  // Text cells repeat the same few words millions of times: read each distinct word once.
+  const surfaceCache = new Map<string, TSurfaceKind | null>();
+  const loadCache = new Map<string, "laden" | "unladen" | null>();
+  const reverseCache = new Map<string, boolean | null>();
+  function cached<T>(
+    cache: Map<string, T | null>,
+    cell: string,
+    read: (c: string) => T | undefined,
+  ) {
+    let v = cache.get(cell);
+    if (v === undefined) {
+      v = read(cell) ?? null;
+      if (cache.size < 1000) cache.set(cell, v);
+    }
+    return v;
+  }
+
+  const reusable: TTurnSample = {
+    t: 0,
+    speed: 0,
+    yawRate: undefined,
+    heading: undefined,
+    steer: undefined,
+    lat: undefined,
+    lon: undefined,
+    reverse: undefined,
+    surface: undefined,
+    laden: undefined,
+  };
 
   function pushRow(fields: readonly string[], line: number) {
     if (fields.length < widest) {
@@ -135,7 +167,12 @@ export function createTelematicsImporter(
         `${formatKmh(Math.abs(v))} is beyond what the machine can reach (limit ${formatKmh(defaults.maxSpeed)})`,
         vCell,
       );
-    const sample: TTurnSample = { t, speed: v };
+    // One sample object, reused for every row with a fixed shape (the segmenter keeps no reference).
+    const sample = reusable;
+    sample.t = t;
+    sample.speed = v;
+    sample.yawRate = sample.heading = sample.steer = sample.lat = sample.lon = undefined;
+    sample.reverse = undefined;
     const yawRate = optionalNumber(fields, yaw);
     if (yawRate !== undefined) {
       if (!Number.isFinite(yawRate) || Math.abs(yawRate) > MAX_YAW_RATE)
@@ -194,8 +231,8 @@ export function createTelematicsImporter(
     let surf = defaults.surface;
     if (surface) {
       const cell = fields[surface.ref.index]!;
-      if (cell.trim() !== "") {
-        const s = parseSurface(cell);
+      if (cell.length > 0 && cell.trim() !== "") {
+        const s = cached(surfaceCache, cell, parseSurface);
         if (!s)
           return log.add(
             line,
@@ -210,7 +247,7 @@ export function createTelematicsImporter(
     if (load) {
       const cell = fields[load.ref.index]!;
       if (cell.trim() !== "") {
-        const l = parseLoadState(cell);
+        const l = cached(loadCache, cell, parseLoadState);
         if (!l) return log.add(line, load.name, "is not a load state (laden or empty)", cell);
         laden = l === "laden";
       }
@@ -218,8 +255,8 @@ export function createTelematicsImporter(
     if (direction) {
       const cell = fields[direction.ref.index]!;
       if (cell.trim() !== "") {
-        const r = parseReverse(cell);
-        if (r === undefined)
+        const r = cached(reverseCache, cell, parseReverse);
+        if (r === null)
           return log.add(
             line,
             direction.name,

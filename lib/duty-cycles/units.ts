@@ -4,11 +4,49 @@ import type { TUnit } from "@/lib/duty-cycles/column-mapping";
 const MPH = 0.44704; // exact, by definition of the international mile
 const FOOT = 0.3048; // exact, international foot
 
+const POW10 = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15];
+
+/**
+ * Plain decimals ("-12.345") read digit by digit. Exact: with at most 15 significant digits the
+ * integer mantissa and the power of ten are both exact doubles, so one division is correctly
+ * rounded (Clinger, "How to read floating point numbers accurately", PLDI 1990, fast path).
+ * Anything else (exponents, spaces, more digits) returns undefined for the general path.
+ */
+function readPlainDecimal(text: string, mark: number): number | undefined {
+  const n = text.length;
+  if (n === 0 || n > 17) return undefined;
+  let i = 0;
+  let negative = false;
+  const first = text.charCodeAt(0);
+  if (first === 45 /* - */ || first === 43 /* + */) {
+    negative = first === 45;
+    i = 1;
+  }
+  let mantissa = 0;
+  let digits = 0;
+  let scale = -1;
+  for (; i < n; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 48 && c <= 57) {
+      mantissa = mantissa * 10 + (c - 48);
+      digits++;
+      if (scale >= 0) scale++;
+    } else if (c === mark && scale < 0) scale = 0;
+    else return undefined;
+  }
+  if (digits === 0 || digits > 15) return undefined;
+  const value = scale > 0 ? mantissa / POW10[scale]! : mantissa;
+  return negative ? -value : value;
+}
+
 /** Parses a decimal number written with "." or "," as the decimal mark; NaN when it is not one. */
 export function parseDecimal(text: string, decimal: "." | ","): number {
-  const trimmed = text.trim();
-  if (trimmed === "") return NaN;
-  const n = Number(decimal === "," ? trimmed.replace(",", ".") : trimmed);
+  const fast = readPlainDecimal(text, decimal === "," ? 44 : 46);
+  if (fast !== undefined) return fast;
+  // Hot path (millions of cells): Number() already ignores surrounding spaces; only a blank
+  // cell, which Number() reads as 0, needs a second look.
+  const n = Number(decimal === "," && text.includes(",") ? text.replace(",", ".") : text);
+  if (n === 0 && text.trim() === "") return NaN;
   return n;
 }
 

@@ -1,0 +1,214 @@
+// npm run bench:ingest: ingest speed and memory on a seeded one-million-row telematics log.
+// Prints papaparse's bare parse time, our parse + segment time, the full upload-to-stored-turns
+// time (upload verb -> pg-boss -> worker process -> PostgreSQL) and the worker's peak RSS.
+// Needs PostgreSQL at DATABASE_URL (default: the dev cluster's "tc_bench" database, created here).
+import { execFileSync, spawn } from "node:child_process";
+import { createReadStream, existsSync, readFileSync, statSync } from "node:fs";
+import { Readable } from "node:stream";
+import os from "node:os";
+import Papa from "papaparse";
+import { eq } from "drizzle-orm";
+
+const ROWS = Number(process.env.BENCH_ROWS ?? 1_000_000);
+const FILE = `var/bench/ingest-${ROWS}.csv`;
+process.env.DATABASE_URL ??= "postgres://postgres@127.0.0.1:54329/tc_bench";
+process.env.UPLOAD_DIR ??= "var/bench/uploads";
+process.env.UPLOAD_LIMIT_BYTES ??= String(200 * 1024 * 1024);
+
+const MAPPING = {
+  kind: "telematics",
+  delimiter: ",",
+  decimal: ".",
+  hasHeader: true,
+  encoding: "utf-8",
+  columns: {
+    time: { index: 0, header: "time", unit: "s" },
+    speed: { index: 1, header: "speed_kmh", unit: "km/h" },
+    yawRate: { index: 2, header: "yaw_rate_dps", unit: "deg/s" },
+    lat: { index: 3, header: "lat", unit: "deg" },
+    lon: { index: 4, header: "lon", unit: "deg" },
+    surface: { index: 5, header: "surface", unit: "text" },
+    direction: { index: 6, header: "gear", unit: "text" },
+  },
+  defaults: { surface: "firm-soil", loadState: "unladen", shiftHours: 8, maxSpeed: 25 },
+} as const;
+
+const ms = (t0: bigint) => Number(process.hrtime.bigint() - t0) / 1e6;
+
+function generate() {
+  if (existsSync(FILE)) return;
+  execFileSync("node_modules/.bin/tsx", ["scripts/bench/ingest-generate.ts", FILE, String(ROWS)], {
+    stdio: "inherit",
+  });
+}
+
+/** papaparse alone: same file, same stream settings, records dropped. */
+function bareParse(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    let n = 0;
+    Papa.parse<string[]>(
+      createReadStream(FILE, { encoding: "utf8", highWaterMark: 256 * 1024 }) as unknown as File,
+      {
+        delimiter: ",",
+        newline: "\n",
+        chunk: (r) => {
+          n += r.data.length;
+        },
+        complete: () => resolve(n),
+        error: reject,
+      },
+    );
+  });
+}
+
+async function ourParse() {
+  const { readCsvRows } = await import("@/features/duty-cycles/server/read-csv-rows");
+  const { createTelematicsImporter } = await import("@/lib/duty-cycles/telematics-import");
+  const importer = createTelematicsImporter(MAPPING as never);
+  await readCsvRows({
+    input: createReadStream(FILE, { encoding: "utf8", highWaterMark: 256 * 1024 }),
+    delimiter: ",",
+    hasHeader: true,
+    onRecord: importer.pushRow,
+  });
+  return importer.finish();
+}
+
+async function best(label: string, runs: number, f: () => Promise<unknown>) {
+  let bestMs = Infinity;
+  for (let i = 0; i < runs; i++) {
+    const t0 = process.hrtime.bigint();
+    await f();
+    bestMs = Math.min(bestMs, ms(t0));
+  }
+  console.log(`${label.padEnd(44)} ${(bestMs / 1000).toFixed(2)} s (best of ${runs})`);
+  return bestMs;
+}
+
+/** Peak resident set of a process (VmHWM), in MB. */
+function peakRssMb(pid: number): number {
+  const status = readFileSync(`/proc/${pid}/status`, "utf8");
+  const kb = Number(/VmHWM:\s+(\d+)/.exec(status)?.[1] ?? NaN);
+  return kb / 1024;
+}
+
+async function fullIngest() {
+  const url = new URL(process.env.DATABASE_URL!);
+  const dbName = url.pathname.slice(1);
+  execFileSync("bash", ["scripts/dev-db.sh", dbName], { stdio: "ignore" });
+  const { getDb, getPool } = await import("@/db/client");
+  const { customers, dealerships, users, dutyCycles } = await import("@/db/schema");
+  const { createUpload } = await import("@/features/duty-cycles/server/create-upload");
+  const { createDutyCycle } = await import("@/features/duty-cycles/server/create-duty-cycle");
+  const { enqueueImport, getImportSender } =
+    await import("@/features/duty-cycles/server/import-queue");
+  const db = getDb();
+  const [dealership] = await db
+    .insert(dealerships)
+    .values({ name: "Bench Dealership", slug: `bench-${Date.now()}` })
+    .returning();
+  const [user] = await db
+    .insert(users)
+    .values({ email: `bench-${Date.now()}@example.test`, name: "Bench" })
+    .returning();
+  const [customer] = await db
+    .insert(customers)
+    .values({ dealershipId: dealership!.id, name: "Bench Farm" })
+    .returning();
+  const actor = {
+    userId: user!.id,
+    email: user!.email,
+    name: "Bench",
+    dealershipId: dealership!.id,
+    roles: ["estimator" as const],
+    customerId: null,
+    unitSystem: "metric" as const,
+  };
+  await getImportSender(); // queue schema ready before the clock starts
+
+  // The worker as its own process, as in production.
+  const worker = spawn(process.execPath, ["--import", "tsx", "scripts/worker.ts"], {
+    env: process.env,
+    stdio: ["ignore", "pipe", "inherit"],
+  });
+  await new Promise<void>((resolve) =>
+    worker.stdout!.on("data", (d: Buffer) => {
+      if (d.toString().includes("waiting")) resolve();
+    }),
+  );
+  let peak = peakRssMb(worker.pid!);
+  const sampler = setInterval(() => {
+    try {
+      peak = Math.max(peak, peakRssMb(worker.pid!));
+    } catch {
+      // exited
+    }
+  }, 100);
+
+  const t0 = process.hrtime.bigint();
+  const upload = await createUpload({
+    db,
+    actor,
+    body: Readable.toWeb(createReadStream(FILE)) as ReadableStream<Uint8Array>,
+    fileName: "bench.csv",
+    contentLength: statSync(FILE).size,
+    limit: Number(process.env.UPLOAD_LIMIT_BYTES),
+  });
+  const uploadMs = ms(t0);
+  const created = await createDutyCycle({
+    db,
+    actor,
+    input: {
+      source: "upload",
+      name: "Bench log",
+      customerId: customer!.id,
+      uploadId: upload.id,
+      mapping: MAPPING,
+    },
+    enqueue: enqueueImport,
+  });
+  let row;
+  for (;;) {
+    [row] = await db.select().from(dutyCycles).where(eq(dutyCycles.id, created.id));
+    if (row!.status === "ready" || row!.status === "failed") break;
+    await new Promise((r) => setTimeout(r, 50));
+  }
+  const fullMs = ms(t0);
+  peak = Math.max(peak, peakRssMb(worker.pid!));
+  clearInterval(sampler);
+  worker.kill("SIGTERM");
+  await new Promise((r) => worker.on("exit", r));
+  await (await getImportSender()).stop({ graceful: false, wait: true });
+  await getPool().end();
+  if (row!.status !== "ready") throw new Error(`import failed: ${row!.failureReason}`);
+  return {
+    uploadMs,
+    fullMs,
+    peak,
+    turns: (row!.summary as { turnsPerHour: number }).turnsPerHour * row!.operatingHours!,
+    hours: row!.operatingHours!,
+    rows: row!.rowsUsed,
+  };
+}
+
+generate();
+const size = statSync(FILE).size;
+console.log(
+  `Ingest benchmark: ${ROWS.toLocaleString("en-GB")} rows, ${(size / 1048576).toFixed(1)} MB, ${os.cpus()[0]?.model ?? "cpu"} x${os.cpus().length}, Node ${process.version}`,
+);
+const bare = await best("papaparse bare parse", 3, bareParse);
+let turns = 0;
+const ours = await best("our parse + segment", 3, async () => {
+  turns = (await ourParse()).turns.length;
+});
+const full = await fullIngest();
+console.log(
+  `${"full upload-to-stored-turns".padEnd(44)} ${(full.fullMs / 1000).toFixed(2)} s (upload ${(full.uploadMs / 1000).toFixed(2)} s)`,
+);
+console.log(`${"worker peak RSS".padEnd(44)} ${full.peak.toFixed(0)} MB`);
+console.log(
+  `turns found ${turns}, rows used ${full.rows}, operating hours ${full.hours.toFixed(2)}`,
+);
+console.log(
+  `ratios: parse+segment ${(ours / bare).toFixed(2)}x bare (target <= 1.5), full ${(full.fullMs / bare).toFixed(2)}x bare (target <= 3), worker RSS ${full.peak < 300 ? "under" : "OVER"} 300 MB`,
+);
