@@ -10,6 +10,7 @@ import {
 } from "./coefficients";
 import { STANDING_CAUTIONS } from "./cautions";
 import { toRadians } from "./angles";
+import { fastTurnKind } from "./fast-turn-kind";
 import { frontAxleLead } from "./front-axle-lead";
 import { prepareMachine, type PreparedAxle, type PreparedMachine } from "./machine-model";
 import { rotationAdvice, type PositionWear } from "./rotation";
@@ -136,14 +137,17 @@ export function estimate(
   const cache = new TurnCache();
   const turns: TTurnResult[] = new Array(dutyCycle.turns.length);
   dutyCycle.turns.forEach((raw, index) => {
-    const parsed = ZTurnKind.safeParse(raw);
-    if (!parsed.success) {
-      if (turnProblems.length < 10) {
-        turnProblems.push(`turns[${index}]: ${z.prettifyError(parsed.error)}`);
-      } else turnProblems.push("");
-      return;
+    let kind = fastTurnKind(raw);
+    if (kind === undefined) {
+      const parsed = ZTurnKind.safeParse(raw);
+      if (!parsed.success) {
+        if (turnProblems.length < 10) {
+          turnProblems.push(`turns[${index}]: ${z.prettifyError(parsed.error)}`);
+        } else turnProblems.push("");
+        return;
+      }
+      kind = parsed.data;
     }
-    const kind = parsed.data;
     const turn = kind.turn;
     const layout = turn.steeringMode ?? pm.defaultLayout;
     const mode = pm.modes.get(layout);
