@@ -98,7 +98,11 @@ export function DutyCycleDetail({ id, canWrite }: { id: string; canWrite: boolea
           {cycle.rowsSkipped > 0 ? (
             <div className="mb-4">
               <Caution
-                title={`${cycle.rowsSkipped.toLocaleString("en-GB")} rows were skipped`}
+                title={
+                  cycle.rowsSkipped === 1
+                    ? "1 row was skipped"
+                    : `${cycle.rowsSkipped.toLocaleString("en-GB")} rows were skipped`
+                }
                 tone="info"
               >
                 {cycle.rowsUsed.toLocaleString("en-GB")} rows were used.{" "}
