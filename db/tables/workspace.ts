@@ -94,6 +94,7 @@ export const machines = pgTable(
     index("machines_dealership_name").on(t.dealershipId, t.name),
     index("machines_dealership_updated").on(t.dealershipId, t.updatedAt),
     index("machines_customer").on(t.customerId),
+    index("machines_dealership_layout").on(t.dealershipId, t.layout),
   ],
 );
 
@@ -131,6 +132,9 @@ export const estimates = pgTable(
   (t) => [
     index("estimates_dealership_created").on(t.dealershipId, t.createdAt),
     index("estimates_customer_created").on(t.customerId, t.createdAt),
+    // Sortable list columns: a page deep into a sorted list reads the index, not every row.
+    index("estimates_dealership_cost").on(t.dealershipId, t.costPerHour),
+    index("estimates_dealership_hours").on(t.dealershipId, t.hoursToFirstReplacement),
     index("estimates_machine").on(t.machineId),
     index("estimates_duty_cycle").on(t.dutyCycleId),
   ],
