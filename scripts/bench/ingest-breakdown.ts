@@ -1,0 +1,80 @@
+// Where the ingest time goes, stage by stage, on the benchmark log (run bench:ingest first).
+// Usage: node --import tsx scripts/bench/ingest-breakdown.ts
+import { createReadStream } from "node:fs";
+import Papa from "papaparse";
+import { readCsvRows } from "@/features/duty-cycles/server/read-csv-rows";
+import { createTelematicsImporter } from "@/lib/duty-cycles/telematics-import";
+import { createTurnSegmenter } from "@/lib/scrub/segment-turns";
+import { parseDecimal } from "@/lib/duty-cycles/units";
+
+const FILE = "var/bench/ingest-1000000.csv";
+const open = () => createReadStream(FILE, { encoding: "utf8", highWaterMark: 256 * 1024 });
+const MAPPING = {
+  kind: "telematics",
+  delimiter: ",",
+  decimal: ".",
+  hasHeader: true,
+  encoding: "utf-8",
+  columns: {
+    time: { index: 0, unit: "s" },
+    speed: { index: 1, unit: "km/h" },
+    yawRate: { index: 2, unit: "deg/s" },
+    lat: { index: 3, unit: "deg" },
+    lon: { index: 4, unit: "deg" },
+    surface: { index: 5, unit: "text" },
+    direction: { index: 6, unit: "text" },
+  },
+  defaults: { surface: "firm-soil", loadState: "unladen", shiftHours: 8, maxSpeed: 25 },
+} as const;
+
+async function time(label: string, f: () => Promise<unknown>) {
+  let best = Infinity;
+  for (let i = 0; i < 3; i++) {
+    const t0 = performance.now();
+    await f();
+    best = Math.min(best, performance.now() - t0);
+  }
+  console.log(`${label.padEnd(40)} ${best.toFixed(0)} ms`);
+}
+
+await time(
+  "papaparse bare",
+  () =>
+    new Promise((resolve) =>
+      Papa.parse(open() as unknown as File, {
+        delimiter: ",",
+        newline: "\n",
+        chunk: () => undefined,
+        complete: resolve,
+      }),
+    ),
+);
+await time("readCsvRows, no-op", () =>
+  readCsvRows({ input: open(), delimiter: ",", hasHeader: true, onRecord: () => undefined }),
+);
+await time("readCsvRows + 5 numbers parsed", () =>
+  readCsvRows({
+    input: open(),
+    delimiter: ",",
+    hasHeader: true,
+    onRecord: (f) => {
+      for (let i = 0; i < 5; i++) parseDecimal(f[i]!, ".");
+    },
+  }),
+);
+await time("readCsvRows + segmenter only", () => {
+  const seg = createTurnSegmenter();
+  return readCsvRows({
+    input: open(),
+    delimiter: ",",
+    hasHeader: true,
+    onRecord: (f) => {
+      seg.push({ t: +f[0]!, speed: +f[1]! / 3.6, yawRate: +f[2]! });
+    },
+  });
+});
+await time("full importer", async () => {
+  const imp = createTelematicsImporter(MAPPING as never);
+  await readCsvRows({ input: open(), delimiter: ",", hasHeader: true, onRecord: imp.pushRow });
+  imp.finish();
+});
