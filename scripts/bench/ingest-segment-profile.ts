@@ -1,4 +1,4 @@
-// Segmenter alone on generated samples (no parsing), for profiling: node --cpu-prof --import tsx scripts/bench/segment-profile.ts
+// Segmenter alone on generated samples (no parsing), for profiling: node --cpu-prof --import tsx scripts/bench/ingest-segment-profile.ts
 import { createTurnSegmenter } from "@/lib/scrub/segment-turns";
 const n = 1_000_000;
 const t = new Float64Array(n);
