@@ -361,6 +361,23 @@ function finite(x: number): number | null {
   return Number.isFinite(x) ? x : null;
 }
 
+function wheelResult(wv: number[], i: number, amount: number): TWheelTurnResult {
+  const o = i * FIELDS;
+  const lateralEnergy = wv[o + F_LAT_ENERGY]! * amount;
+  const longitudinalEnergy = wv[o + F_LON_ENERGY]! * amount;
+  return {
+    position: POSITIONS[i]!,
+    steerAngle: wv[o + F_STEER]!,
+    slipAngle: wv[o + F_SLIP]!,
+    pathRadius: finite(wv[o + F_PATH]!),
+    lateralScrub: wv[o + F_LAT_SCRUB]! * amount,
+    longitudinalScrub: wv[o + F_LON_SCRUB]! * amount,
+    lateralEnergy,
+    longitudinalEnergy,
+    energy: lateralEnergy + longitudinalEnergy,
+  };
+}
+
 function turnResult(
   index: number,
   label: string,
@@ -371,26 +388,19 @@ function turnResult(
 ): TTurnResult {
   const wv = unit.wheels;
   let energy = 0;
-  const wheels: TWheelTurnResult[] = detail && unit.feasible ? [] : NO_WHEELS;
   for (let i = 0; i < 4; i++) {
     const o = i * FIELDS;
-    const lateralEnergy = wv[o + F_LAT_ENERGY]! * amount;
-    const longitudinalEnergy = wv[o + F_LON_ENERGY]! * amount;
-    energy += lateralEnergy + longitudinalEnergy;
-    if (detail && unit.feasible) {
-      wheels.push({
-        position: POSITIONS[i]!,
-        steerAngle: wv[o + F_STEER]!,
-        slipAngle: wv[o + F_SLIP]!,
-        pathRadius: finite(wv[o + F_PATH]!),
-        lateralScrub: wv[o + F_LAT_SCRUB]! * amount,
-        longitudinalScrub: wv[o + F_LON_SCRUB]! * amount,
-        lateralEnergy,
-        longitudinalEnergy,
-        energy: lateralEnergy + longitudinalEnergy,
-      });
-    }
+    energy += (wv[o + F_LAT_ENERGY]! + wv[o + F_LON_ENERGY]!) * amount;
   }
+  const wheels =
+    detail && unit.feasible
+      ? [
+          wheelResult(wv, 0, amount),
+          wheelResult(wv, 1, amount),
+          wheelResult(wv, 2, amount),
+          wheelResult(wv, 3, amount),
+        ]
+      : NO_WHEELS;
   return {
     index,
     label,

@@ -101,8 +101,6 @@ type Step = {
   laden?: boolean;
   /** First step after a gap or the start of the log. */
   restart: boolean;
-  /** Smoothed yaw rate, filled in when the step is classified (deg/s). */
-  rate: number;
 };
 
 /** Turns raw samples into heading and distance increments, one source picked per sample. */
@@ -169,6 +167,19 @@ class HeadingTracker {
     this.gpsPsi = undefined;
   }
 
+  /** The result of the latest step, reused: the segmenter copies what it keeps. */
+  readonly out: Step = {
+    t: 0,
+    dt: 0,
+    dPsi: 0,
+    ds: 0,
+    dsReverse: 0,
+    speed: 0,
+    surface: undefined,
+    laden: undefined,
+    restart: true,
+  };
+
   step(s: TTurnSample): Step {
     const reverse = s.reverse ?? s.speed < 0;
     const speed = reverse ? -Math.abs(s.speed) : Math.abs(s.speed);
@@ -199,43 +210,81 @@ class HeadingTracker {
     this.prevSpeed = speed;
     this.prevRate = rate;
     this.prevPsi = psi;
-    return {
-      t: s.t,
-      dt,
-      dPsi,
-      ds,
-      dsReverse: reverse ? ds : 0,
-      speed,
-      surface: s.surface,
-      laden: s.laden,
-      restart,
-      rate: 0,
-    };
+    const out = this.out;
+    out.t = s.t;
+    out.dt = dt;
+    out.dPsi = dPsi;
+    out.ds = ds;
+    out.dsReverse = reverse ? ds : 0;
+    out.speed = speed;
+    out.surface = s.surface;
+    out.laden = s.laden;
+    out.restart = restart;
+    return out;
   }
 }
 
-/** A step inside an open turn, with its smoothed yaw rate. */
-type TurnStep = Step;
+/**
+ * Steps waiting for their smoothing window, in typed-array rings indexed by a running count:
+ * one slot per sample, no object per sample (this runs for every row of a large log).
+ */
+class StepRing {
+  t = new Float64Array(64);
+  dt = new Float64Array(64);
+  dPsi = new Float64Array(64);
+  ds = new Float64Array(64);
+  dsReverse = new Float64Array(64);
+  surface: (string | undefined)[] = new Array(64);
+  laden = new Int8Array(64); // -1 unknown, 0 unladen, 1 laden
+  mask = 63;
 
-/** Records the smoothed rate on the step itself (no copy per sample: this runs for every row). */
-function withRate(step: Step, rate: number): TurnStep {
-  step.rate = rate;
-  return step;
+  /** Makes room for `count` live entries starting at running index `from`. */
+  ensure(from: number, count: number) {
+    if (count <= this.mask) return;
+    let size = this.mask + 1;
+    while (size <= count) size *= 2;
+    const grow = <A extends Float64Array | Int8Array>(old: A, make: (n: number) => A): A => {
+      const next = make(size);
+      for (let i = from; i < from + this.mask + 1; i++) next[i & (size - 1)] = old[i & this.mask]!;
+      return next;
+    };
+    this.t = grow(this.t, (n) => new Float64Array(n));
+    this.dt = grow(this.dt, (n) => new Float64Array(n));
+    this.dPsi = grow(this.dPsi, (n) => new Float64Array(n));
+    this.ds = grow(this.ds, (n) => new Float64Array(n));
+    this.dsReverse = grow(this.dsReverse, (n) => new Float64Array(n));
+    this.laden = grow(this.laden, (n) => new Int8Array(n));
+    const surface = new Array<string | undefined>(size);
+    for (let i = from; i < from + this.mask + 1; i++)
+      surface[i & (size - 1)] = this.surface[i & this.mask];
+    this.surface = surface;
+    this.mask = size - 1;
+  }
 }
 
+/** The steps of an open turn, then of its quiet tail (parallel arrays). */
 type OpenTurn = {
   sign: number;
-  /** Steps of the turn, then of the quiet tail after the last turning step. */
-  steps: TurnStep[];
+  t: number[];
+  dt: number[];
+  dPsi: number[];
+  ds: number[];
+  dsReverse: number[];
+  rate: number[];
+  surface: string | undefined;
+  laden: number;
   /** Number of steps up to and including the last one that was still turning. */
   activeLen: number;
   quietSince: number | undefined;
 };
 
-/** Time-weighted value that |rate| exceeds for the top tenth of the turn: its plateau level. */
-function plateauRate(steps: readonly TurnStep[]): number {
-  const rates = steps.map((s) => Math.abs(s.rate)).sort((x, y) => x - y);
-  return rates[Math.floor(rates.length * 0.9)] ?? 0;
+/** The value |rate| exceeds for the top tenth of the turn's steps: its plateau level. */
+function plateauRate(rates: readonly number[], n: number): number {
+  const sorted = rates
+    .slice(0, n)
+    .map(Math.abs)
+    .sort((x, y) => x - y);
+  return sorted[Math.floor(sorted.length * 0.9)] ?? 0;
 }
 
 export type TTurnSegmenter = {
@@ -247,48 +296,170 @@ export type TTurnSegmenter = {
 
 /** A streaming segmenter: feed samples in time order, collect turns as they complete. */
 export function createTurnSegmenter(options: TSegmentOptions = {}): TTurnSegmenter {
-  const o = { ...DEFAULTS, ...options };
-  const tracker = new HeadingTracker(o);
-  const half = o.smoothingWindow / 2;
-  // Steps waiting for their smoothing window to fill (a few seconds of samples at most).
-  let buf: Step[] = [];
-  let head = 0; // next step to classify
-  let lo = 0; // first step inside the window of buf[head]
-  let hi = 0; // one past the last step inside that window
-  let winPsi = 0;
-  let winDt = 0;
-  let open: OpenTurn | undefined;
-  const out: TDetectedTurn[] = [];
+  return new Segmenter({ ...DEFAULTS, ...options });
+}
 
-  function close(turn: OpenTurn) {
-    const steps = turn.steps.slice(0, turn.activeLen);
+class Segmenter implements TTurnSegmenter {
+  private readonly tracker: HeadingTracker;
+  private readonly half: number;
+  private readonly ring = new StepRing();
+  // Running indices into the ring: next to classify, window start, window end, next to write.
+  private head = 0;
+  private lo = 0;
+  private hi = 0;
+  private tail = 0;
+  private winPsi = 0;
+  private winDt = 0;
+  private open: OpenTurn | undefined;
+  private out: TDetectedTurn[] = [];
+
+  constructor(
+    private readonly o: Required<Omit<TSegmentOptions, "wheelbase">> & { wheelbase?: number },
+  ) {
+    this.tracker = new HeadingTracker(o);
+    this.half = o.smoothingWindow / 2;
+  }
+
+  push(sample: TTurnSample): TDetectedTurn[] {
+    const step = this.tracker.step(sample);
+    if (step.restart) this.restart();
+    const r = this.ring;
+    r.ensure(this.lo, this.tail - this.lo + 1);
+    const k = this.tail & r.mask;
+    r.t[k] = step.t;
+    r.dt[k] = step.dt;
+    r.dPsi[k] = step.dPsi;
+    r.ds[k] = step.ds;
+    r.dsReverse[k] = step.dsReverse;
+    r.surface[k] = step.surface;
+    r.laden[k] = step.laden === undefined ? -1 : step.laden ? 1 : 0;
+    this.tail++;
+    this.drain(false);
+    // Most samples finish no turn: skip allocating an empty array for each of them.
+    if (this.out.length === 0) return [];
+    const done = this.out;
+    this.out = [];
+    return done;
+  }
+
+  finish(): TDetectedTurn[] {
+    this.restart();
+    const done = this.out;
+    this.out = [];
+    return done;
+  }
+
+  /** Classifies each step once the window around it is complete (or the stretch of log ended). */
+  private drain(final: boolean) {
+    const r = this.ring;
+    const half = this.half;
+    while (this.head < this.tail) {
+      const centreT = r.t[this.head & r.mask]!;
+      while (this.hi < this.tail && r.t[this.hi & r.mask]! <= centreT + half) {
+        this.winPsi += r.dPsi[this.hi & r.mask]!;
+        this.winDt += r.dt[this.hi & r.mask]!;
+        this.hi++;
+      }
+      if (this.hi >= this.tail && !final) break;
+      while (this.lo < this.head && r.t[this.lo & r.mask]! < centreT - half) {
+        this.winPsi -= r.dPsi[this.lo & r.mask]!;
+        this.winDt -= r.dt[this.lo & r.mask]!;
+        this.lo++;
+      }
+      this.classify(this.head & r.mask, this.winDt > 0 ? this.winPsi / this.winDt : 0);
+      this.head++;
+    }
+  }
+
+  /** A gap in the log: finish the stretch before it, so no window spans the gap. */
+  private restart() {
+    this.drain(true);
+    if (this.open) this.close(this.open);
+    this.open = undefined;
+    this.lo = this.hi = this.head = this.tail;
+    this.winPsi = this.winDt = 0;
+  }
+
+  private append(turn: OpenTurn, k: number, rate: number) {
+    const r = this.ring;
+    turn.t.push(r.t[k]!);
+    turn.dt.push(r.dt[k]!);
+    turn.dPsi.push(r.dPsi[k]!);
+    turn.ds.push(r.ds[k]!);
+    turn.dsReverse.push(r.dsReverse[k]!);
+    turn.rate.push(rate);
+  }
+
+  private classify(k: number, rate: number) {
+    const o = this.o;
+    const turning = Math.abs(rate) >= o.yawThreshold;
+    const sign = Math.sign(rate);
+    const open = this.open;
+    if (open) {
+      if (turning && sign === open.sign) {
+        this.append(open, k, rate);
+        open.activeLen = open.t.length;
+        open.quietSince = undefined;
+        return;
+      }
+      if (!turning) {
+        open.quietSince ??= open.t[open.activeLen - 1]!;
+        if (this.ring.t[k]! - open.quietSince <= o.mergeGap) {
+          this.append(open, k, rate);
+          return;
+        }
+      }
+      this.close(open);
+      this.open = undefined;
+    }
+    if (turning && this.ring.dt[k]! > 0) {
+      const turn: OpenTurn = {
+        sign,
+        t: [],
+        dt: [],
+        dPsi: [],
+        ds: [],
+        dsReverse: [],
+        rate: [],
+        surface: this.ring.surface[k],
+        laden: this.ring.laden[k]!,
+        activeLen: 1,
+        quietSince: undefined,
+      };
+      this.append(turn, k, rate);
+      this.open = turn;
+    }
+  }
+
+  private close(turn: OpenTurn) {
+    const o = this.o;
+    const n = turn.activeLen;
     let psi = 0;
-    for (const st of steps) psi += st.dPsi;
+    for (let i = 0; i < n; i++) psi += turn.dPsi[i]!;
     const headingChange = Math.abs(psi);
-    if (headingChange < o.minHeadingChange || steps.length === 0) return;
+    if (headingChange < o.minHeadingChange || n === 0) return;
     // Smoothing spreads a turn's edges by half a window each side. For a steady turn the smoothed
     // rate crosses half its plateau where the turn really starts and ends, so distance, duration
     // and radius come from that core; the heading change sums the whole window (nothing lost).
-    const half = plateauRate(steps) / 2;
-    let first = steps.findIndex((st) => Math.abs(st.rate) >= half);
-    let last = steps.length - 1;
-    while (last > first && Math.abs(steps[last]!.rate) < half) last--;
-    if (first < 0) first = 0;
+    const half = plateauRate(turn.rate, n) / 2;
+    let first = 0;
+    while (first < n - 1 && Math.abs(turn.rate[first]!) < half) first++;
+    let last = n - 1;
+    while (last > first && Math.abs(turn.rate[last]!) < half) last--;
     let dist = 0;
     let distRev = 0;
     for (let i = first; i <= last; i++) {
-      dist += steps[i]!.ds;
-      distRev += steps[i]!.dsReverse;
+      dist += turn.ds[i]!;
+      distRev += turn.dsReverse[i]!;
     }
-    const start = steps[first]!.t - steps[first]!.dt;
-    const end = steps[last]!.t;
+    const start = turn.t[first]! - turn.dt[first]!;
+    const end = turn.t[last]!;
     const duration = end - start;
     const speed = duration > 0 ? dist / duration : 0;
     let radius = dist / (headingChange * DEG);
     const pivot = speed < o.pivotSpeed || radius < o.pivotRadius;
     if (pivot) radius = 0;
-    const opening = steps[0]!;
-    out.push({
+    this.out.push({
       start,
       end,
       headingChange,
@@ -298,86 +469,10 @@ export function createTurnSegmenter(options: TSegmentOptions = {}): TTurnSegment
       direction: psi > 0 ? "left" : "right",
       reverse: distRev > dist / 2,
       pivot,
-      ...(opening.surface !== undefined ? { surface: opening.surface } : {}),
-      ...(opening.laden !== undefined ? { laden: opening.laden } : {}),
+      ...(turn.surface !== undefined ? { surface: turn.surface } : {}),
+      ...(turn.laden >= 0 ? { laden: turn.laden === 1 } : {}),
     });
   }
-
-  function classify(step: Step, rate: number) {
-    const turning = Math.abs(rate) >= o.yawThreshold;
-    const sign = Math.sign(rate);
-    if (open) {
-      if (turning && sign === open.sign) {
-        open.steps.push(withRate(step, rate));
-        open.activeLen = open.steps.length;
-        open.quietSince = undefined;
-        return;
-      }
-      if (!turning) {
-        open.quietSince ??= open.steps[open.activeLen - 1]!.t;
-        if (step.t - open.quietSince <= o.mergeGap) {
-          open.steps.push(withRate(step, rate));
-          return;
-        }
-      }
-      close(open);
-      open = undefined;
-    }
-    if (turning && step.dt > 0) {
-      open = { sign, steps: [withRate(step, rate)], activeLen: 1, quietSince: undefined };
-    }
-  }
-
-  /** Classifies buf[head] once the window around it is complete (or the stretch of log ended). */
-  function drain(final: boolean) {
-    while (head < buf.length) {
-      const centre = buf[head]!;
-      while (hi < buf.length && buf[hi]!.t <= centre.t + half) {
-        winPsi += buf[hi]!.dPsi;
-        winDt += buf[hi]!.dt;
-        hi++;
-      }
-      if (hi >= buf.length && !final) break;
-      while (lo < head && buf[lo]!.t < centre.t - half) {
-        winPsi -= buf[lo]!.dPsi;
-        winDt -= buf[lo]!.dt;
-        lo++;
-      }
-      classify(centre, winDt > 0 ? winPsi / winDt : 0);
-      head++;
-    }
-    if (lo > 4096) {
-      buf = buf.slice(lo);
-      head -= lo;
-      hi -= lo;
-      lo = 0;
-    }
-  }
-
-  /** A gap in the log: finish the stretch before it, so no window spans the gap. */
-  function restart() {
-    drain(true);
-    if (open) close(open);
-    open = undefined;
-    buf = [];
-    head = lo = hi = 0;
-    winPsi = winDt = 0;
-  }
-
-  return {
-    push(sample) {
-      const step = tracker.step(sample);
-      if (step.restart) restart();
-      buf.push(step);
-      drain(false);
-      // Most samples finish no turn: skip allocating an empty array for each of them.
-      return out.length === 0 ? [] : out.splice(0, out.length);
-    },
-    finish() {
-      restart();
-      return out.splice(0, out.length);
-    },
-  };
 }
 
 /** Detects the turns in a whole log held in memory. */

@@ -116,7 +116,12 @@ export function angleErrorCurve({
     if ((s.layout === "rear" || s.layout === "four-wheel") && s.wheelAngles === "parallel") {
       outer = inner;
     }
-    if (linkage) outer = toDegrees(trapezoidOuterRad(linkage, di));
+    if (linkage) {
+      const o = trapezoidOuterRad(linkage, di);
+      // Beyond the linkage's reach the curve ends (the machine cannot steer further).
+      if (Number.isNaN(o)) break;
+      outer = toDegrees(o);
+    }
     const single = s.layout === "turntable" || s.layout === "articulated";
     if (single) outer = inner;
     const idealOuter = single ? inner : ideal;
