@@ -301,17 +301,17 @@ CREATE UNIQUE INDEX "mapping_templates_dealership_name" ON "mapping_templates" U
 CREATE UNIQUE INDEX "memberships_dealership_user_role" ON "memberships" USING btree ("dealership_id","user_id","role");--> statement-breakpoint
 CREATE INDEX "memberships_user" ON "memberships" USING btree ("user_id");--> statement-breakpoint
 CREATE INDEX "memberships_customer" ON "memberships" USING btree ("customer_id") WHERE "memberships"."customer_id" is not null;--> statement-breakpoint
-CREATE INDEX "customers_dealership_name" ON "customers" USING btree ("dealership_id","name");--> statement-breakpoint
-CREATE INDEX "customers_dealership_updated" ON "customers" USING btree ("dealership_id","updated_at");--> statement-breakpoint
-CREATE INDEX "estimates_dealership_created" ON "estimates" USING btree ("dealership_id","created_at");--> statement-breakpoint
+CREATE INDEX "customers_dealership_name" ON "customers" USING btree ("dealership_id","name","id");--> statement-breakpoint
+CREATE INDEX "customers_dealership_updated" ON "customers" USING btree ("dealership_id","updated_at","id");--> statement-breakpoint
+CREATE INDEX "estimates_dealership_created" ON "estimates" USING btree ("dealership_id","created_at","id");--> statement-breakpoint
 CREATE INDEX "estimates_customer_created" ON "estimates" USING btree ("customer_id","created_at");--> statement-breakpoint
-CREATE INDEX "estimates_dealership_cost" ON "estimates" USING btree ("dealership_id","cost_per_hour");--> statement-breakpoint
-CREATE INDEX "estimates_dealership_hours" ON "estimates" USING btree ("dealership_id","hours_to_first_replacement");--> statement-breakpoint
+CREATE INDEX "estimates_dealership_cost" ON "estimates" USING btree ("dealership_id","cost_per_hour","id");--> statement-breakpoint
+CREATE INDEX "estimates_dealership_hours" ON "estimates" USING btree ("dealership_id","hours_to_first_replacement","id");--> statement-breakpoint
 CREATE INDEX "estimates_machine" ON "estimates" USING btree ("machine_id");--> statement-breakpoint
 CREATE INDEX "estimates_duty_cycle" ON "estimates" USING btree ("duty_cycle_id");--> statement-breakpoint
-CREATE INDEX "machines_dealership_name" ON "machines" USING btree ("dealership_id","name");--> statement-breakpoint
-CREATE INDEX "machines_dealership_updated" ON "machines" USING btree ("dealership_id","updated_at");--> statement-breakpoint
+CREATE INDEX "machines_dealership_name" ON "machines" USING btree ("dealership_id","name","id");--> statement-breakpoint
+CREATE INDEX "machines_dealership_updated" ON "machines" USING btree ("dealership_id","updated_at","id");--> statement-breakpoint
 CREATE INDEX "machines_customer" ON "machines" USING btree ("customer_id");--> statement-breakpoint
-CREATE INDEX "machines_dealership_layout" ON "machines" USING btree ("dealership_id","layout");--> statement-breakpoint
+CREATE INDEX "machines_dealership_layout" ON "machines" USING btree ("dealership_id","layout","name");--> statement-breakpoint
 CREATE INDEX "sites_customer" ON "sites" USING btree ("customer_id");--> statement-breakpoint
-CREATE INDEX "sites_dealership_name" ON "sites" USING btree ("dealership_id","name");
+CREATE INDEX "sites_dealership_name" ON "sites" USING btree ("dealership_id","name","id");

@@ -39,8 +39,8 @@ export const customers = pgTable(
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
-    index("customers_dealership_name").on(t.dealershipId, t.name),
-    index("customers_dealership_updated").on(t.dealershipId, t.updatedAt),
+    index("customers_dealership_name").on(t.dealershipId, t.name, t.id),
+    index("customers_dealership_updated").on(t.dealershipId, t.updatedAt, t.id),
   ],
 );
 
@@ -63,7 +63,7 @@ export const sites = pgTable(
   },
   (t) => [
     index("sites_customer").on(t.customerId),
-    index("sites_dealership_name").on(t.dealershipId, t.name),
+    index("sites_dealership_name").on(t.dealershipId, t.name, t.id),
   ],
 );
 
@@ -91,10 +91,10 @@ export const machines = pgTable(
     updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
-    index("machines_dealership_name").on(t.dealershipId, t.name),
-    index("machines_dealership_updated").on(t.dealershipId, t.updatedAt),
+    index("machines_dealership_name").on(t.dealershipId, t.name, t.id),
+    index("machines_dealership_updated").on(t.dealershipId, t.updatedAt, t.id),
     index("machines_customer").on(t.customerId),
-    index("machines_dealership_layout").on(t.dealershipId, t.layout),
+    index("machines_dealership_layout").on(t.dealershipId, t.layout, t.name),
   ],
 );
 
@@ -130,11 +130,11 @@ export const estimates = pgTable(
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
-    index("estimates_dealership_created").on(t.dealershipId, t.createdAt),
+    index("estimates_dealership_created").on(t.dealershipId, t.createdAt, t.id),
     index("estimates_customer_created").on(t.customerId, t.createdAt),
     // Sortable list columns: a page deep into a sorted list reads the index, not every row.
-    index("estimates_dealership_cost").on(t.dealershipId, t.costPerHour),
-    index("estimates_dealership_hours").on(t.dealershipId, t.hoursToFirstReplacement),
+    index("estimates_dealership_cost").on(t.dealershipId, t.costPerHour, t.id),
+    index("estimates_dealership_hours").on(t.dealershipId, t.hoursToFirstReplacement, t.id),
     index("estimates_machine").on(t.machineId),
     index("estimates_duty_cycle").on(t.dutyCycleId),
   ],

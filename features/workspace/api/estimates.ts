@@ -12,6 +12,7 @@ import type {
   TEstimateRow,
 } from "@/features/workspace/schemas/estimate";
 import { apiFetch, toQueryString } from "@/features/workspace/api/http";
+import { removeFromLists, restoreLists } from "@/features/workspace/api/optimistic";
 import { listParams, type TListState } from "@/features/workspace/api/list-state";
 
 export const estimateKeys = {
@@ -57,21 +58,8 @@ export function useDeleteEstimate() {
   return useMutation({
     mutationFn: (id: string) =>
       apiFetch(`/api/v1/estimates/${id}?confirm=true`, { method: "DELETE" }),
-    onMutate: async (id) => {
-      await qc.cancelQueries({ queryKey: estimateKeys.lists() });
-      const previous = qc.getQueriesData<TPage<TEstimateRow>>({ queryKey: estimateKeys.lists() });
-      for (const [key, page] of previous)
-        if (page)
-          qc.setQueryData(key, {
-            ...page,
-            items: page.items.filter((e) => e.id !== id),
-            total: page.total - 1,
-          });
-      return { previous };
-    },
-    onError: (_e, _id, ctx) => {
-      for (const [key, page] of ctx?.previous ?? []) qc.setQueryData(key, page);
-    },
+    onMutate: (id) => removeFromLists(qc, estimateKeys.lists(), id),
+    onError: (_e, _id, ctx) => restoreLists(qc, ctx),
     onSettled: () => qc.invalidateQueries({ queryKey: estimateKeys.lists() }),
   });
 }

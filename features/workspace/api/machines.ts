@@ -13,6 +13,7 @@ import type {
   TMachineRow,
 } from "@/features/workspace/schemas/machine";
 import { apiFetch, toQueryString } from "@/features/workspace/api/http";
+import { removeFromLists, restoreLists } from "@/features/workspace/api/optimistic";
 import { listParams, type TListState } from "@/features/workspace/api/list-state";
 
 export const machineKeys = {
@@ -81,21 +82,8 @@ export function useDeleteMachine() {
   return useMutation({
     mutationFn: (id: string) =>
       apiFetch(`/api/v1/machines/${id}?confirm=true`, { method: "DELETE" }),
-    onMutate: async (id) => {
-      await qc.cancelQueries({ queryKey: machineKeys.lists() });
-      const previous = qc.getQueriesData<TPage<TMachineRow>>({ queryKey: machineKeys.lists() });
-      for (const [key, page] of previous)
-        if (page)
-          qc.setQueryData(key, {
-            ...page,
-            items: page.items.filter((m) => m.id !== id),
-            total: page.total - 1,
-          });
-      return { previous };
-    },
-    onError: (_e, _id, ctx) => {
-      for (const [key, page] of ctx?.previous ?? []) qc.setQueryData(key, page);
-    },
+    onMutate: (id) => removeFromLists(qc, machineKeys.lists(), id),
+    onError: (_e, _id, ctx) => restoreLists(qc, ctx),
     onSettled: () => qc.invalidateQueries({ queryKey: machineKeys.all }),
   });
 }

@@ -57,7 +57,8 @@ export async function listEstimates({
       .from(estimates)
       .leftJoin(customers, eq(customers.id, estimates.customerId))
       .where(where)
-      .orderBy(order(sortColumns[query.sort]), asc(estimates.id))
+      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .orderBy(order(sortColumns[query.sort]), order(estimates.id))
       .limit(query.pageSize)
       .offset((query.page - 1) * query.pageSize),
     db

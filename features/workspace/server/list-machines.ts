@@ -54,7 +54,8 @@ export async function listMachines({
       .from(machines)
       .leftJoin(customers, eq(customers.id, machines.customerId))
       .where(where)
-      .orderBy(order(sortColumns[query.sort]), asc(machines.id))
+      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .orderBy(order(sortColumns[query.sort]), order(machines.id))
       .limit(query.pageSize)
       .offset((query.page - 1) * query.pageSize),
     db
