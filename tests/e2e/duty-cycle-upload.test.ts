@@ -87,4 +87,25 @@ describe("duty-cycle upload journey", () => {
     await expect(row.getByText("ready").count()).resolves.toBe(1);
     await page.close();
   });
+
+  it("builds a yard loader's duty cycle without a file", async () => {
+    const page = await browser.newPage();
+    const errors: string[] = [];
+    page.on("pageerror", (e) => errors.push(e.message));
+    await signIn(page, "estimator@brackenridge.test");
+    await page.goto(`${baseUrl}/duty-cycles/build`);
+    await page.getByLabel("Example").selectOption({ label: "Yard loader, 40 cycles per hour" });
+    // Four turns a cycle at 40 cycles an hour: 160 turns per hour in the live preview.
+    await page.getByText("160.0").first().waitFor();
+    const name = `Clamp loading ${uniqueTag()}`;
+    await page.getByLabel("Duty cycle name").fill(name);
+    await page.getByLabel("Customer", { exact: true }).selectOption({ label: "Hollin Vale Farm" });
+    await page.getByRole("button", { name: "Save duty cycle" }).click();
+    await page.waitForURL(/\/duty-cycles\/[0-9a-f-]{36}$/, { timeout: 30_000 });
+    await page.getByRole("heading", { name }).waitFor();
+    await page.getByText("Built without a file").first().waitFor();
+    await page.getByText("Turns (4)").waitFor();
+    expect(errors).toEqual([]);
+    await page.close();
+  });
 });
