@@ -3,14 +3,17 @@ import { getDb, getPool } from "@/db/client";
 import { seedTenancy } from "@/scripts/seed/tenancy";
 import { seedAccounts } from "@/scripts/seed/accounts";
 import { seedWorkspace } from "@/scripts/seed/workspace";
+import { seedDutyCycles } from "@/scripts/seed/duty-cycles";
 
 const db = getDb();
 const tenancy = await seedTenancy(db);
 console.log(`[seed] dealership "${tenancy.dealership.name}" ready`);
 const accounts = await seedAccounts(db, { customers: tenancy.customers });
 console.log(`[seed] ${accounts.count} demo sign-ins ready`);
+const dutyCycleIds = await seedDutyCycles(db, { dealership: tenancy.dealership });
 const workspace = await seedWorkspace(db, {
   dealership: tenancy.dealership,
+  dutyCycleIds,
   adminEmail: "admin@brackenridge.test",
 });
 console.log(
