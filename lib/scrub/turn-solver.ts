@@ -126,6 +126,137 @@ function assemble(w: WheelSet, u: number, v: number, r: number, withSteer: boole
   S[G2P] = g2p;
 }
 
+/** Jacobian scratch: a11, a12, a21, a22 of the current 2×2 Newton system. */
+const J = new Float64Array(4);
+
+/**
+ * A two-unknown balance problem for {@link newton2}: residual(a, b) evaluates the tyre forces and
+ * leaves the residuals in S (returning the scaled squared norm); jacobian() writes J for the
+ * point last evaluated.
+ */
+interface BalanceProblem {
+  residual(a: number, b: number): number;
+  jacobian(a: number, b: number): void;
+}
+
+/** Unknowns (v, r) at fixed steer. */
+class FixedSteerProblem implements BalanceProblem {
+  w!: WheelSet;
+  u = 1;
+  mass = 0;
+  xcg = 0;
+  lever = 1;
+
+  residual(v: number, r: number): number {
+    assemble(this.w, this.u, v, r, false);
+    return addInertia(this.mass * this.u * r, this.xcg, this.lever);
+  }
+
+  jacobian(): void {
+    J[0] = S[G1V]!;
+    J[1] = S[G1R]! - this.mass * this.u;
+    J[2] = S[G2V]!;
+    J[3] = S[G2R]! - this.mass * this.u * this.xcg;
+  }
+}
+
+/** Unknowns (v, p) at fixed path radius of the origin: r = √(u² + v²)/R. */
+class RadiusProblem implements BalanceProblem {
+  w!: WheelSet;
+  map!: SteerMap;
+  u = 1;
+  radius = 1;
+  mass = 0;
+  xcg = 0;
+  lever = 1;
+
+  residual(v: number, p: number): number {
+    if (!this.map.apply(p, this.w)) return Infinity;
+    const r = Math.sqrt(this.u * this.u + v * v) / this.radius;
+    assemble(this.w, this.u, v, r, true);
+    return addInertia(this.mass * this.u * r, this.xcg, this.lever);
+  }
+
+  jacobian(v: number): void {
+    const drdv = v / (this.radius * Math.sqrt(this.u * this.u + v * v));
+    const inertia = this.mass * this.u * drdv;
+    J[0] = S[G1V]! + S[G1R]! * drdv - inertia;
+    J[1] = S[G1P]!;
+    J[2] = S[G2V]! + S[G2R]! * drdv - inertia * this.xcg;
+    J[3] = S[G2P]!;
+  }
+}
+
+/** Subtract the inertia force m·a_y (at x_cg) from the residuals; return the scaled norm². */
+function addInertia(force: number, xcg: number, lever: number): number {
+  S[G1] = S[G1]! - force;
+  S[G2] = S[G2]! - force * xcg;
+  const b = S[G2]! / lever;
+  return S[G1]! * S[G1]! + b * b;
+}
+
+const NEWTON = { a: 0, b: 0, converged: false, iterations: 0 };
+
+/**
+ * Damped Newton on two unknowns: full step, halved until the scaled residual norm falls;
+ * `maxStepB` caps the second unknown's step (steering input). Stops when both residuals are
+ * below TOLERANCE relative to Σ μN (and its lever arm).
+ */
+function newton2(
+  problem: BalanceProblem,
+  a0: number,
+  b0: number,
+  scale: number,
+  lever: number,
+  maxStepB: number,
+): void {
+  let a = a0;
+  let b = b0;
+  let norm = problem.residual(a, b);
+  let it = 0;
+  let converged = false;
+  for (; it < MAX_ITERATIONS && Number.isFinite(norm); it++) {
+    if (Math.abs(S[G1]!) < TOLERANCE * scale && Math.abs(S[G2]!) < TOLERANCE * scale * lever) {
+      converged = true;
+      break;
+    }
+    problem.jacobian(a, b);
+    const det = J[0]! * J[3]! - J[1]! * J[2]!;
+    if (!Number.isFinite(det) || det === 0) break;
+    let da = -(J[3]! * S[G1]! - J[1]! * S[G2]!) / det;
+    let db = -(-J[2]! * S[G1]! + J[0]! * S[G2]!) / det;
+    if (Math.abs(db) > maxStepB) {
+      const f = maxStepB / Math.abs(db);
+      da *= f;
+      db *= f;
+    }
+    let accepted = false;
+    for (let k = 0; k < 12; k++) {
+      const trial = problem.residual(a + da, b + db);
+      if (trial < norm || trial === 0) {
+        a += da;
+        b += db;
+        norm = trial;
+        accepted = true;
+        break;
+      }
+      da /= 2;
+      db /= 2;
+    }
+    if (!accepted) {
+      problem.residual(a, b);
+      break;
+    }
+  }
+  NEWTON.a = a;
+  NEWTON.b = b;
+  NEWTON.converged = converged;
+  NEWTON.iterations = it;
+}
+
+const fixedSteer = new FixedSteerProblem();
+const atRadius = new RadiusProblem();
+
 /**
  * Fixed steer angles: solve (v, r) at forward speed u. Start from state.v, state.r.
  * `mass` (kg) and `xcg` (m) add the lateral-acceleration term; pass mass 0 for low speed.
@@ -137,70 +268,24 @@ export function solveFixedSteer(
   xcg: number,
   state: SolveState,
 ): void {
-  const scale = w.frictionScale();
   const lever = leverScale(w);
-  let v = state.v;
-  let r = state.r;
-  let norm = residualFixed(w, u, v, r, mass, xcg, lever);
-  let it = 0;
-  let converged = false;
-  for (; it < MAX_ITERATIONS; it++) {
-    if (Math.abs(S[G1]!) < TOLERANCE * scale && Math.abs(S[G2]!) < TOLERANCE * scale * lever) {
-      converged = true;
-      break;
-    }
-    const a11 = S[G1V]!;
-    const a12 = S[G1R]! - mass * u;
-    const a21 = S[G2V]!;
-    const a22 = S[G2R]! - mass * u * xcg;
-    const det = a11 * a22 - a12 * a21;
-    if (!Number.isFinite(det) || det === 0) break;
-    let dv = -(a22 * S[G1]! - a12 * S[G2]!) / det;
-    let dr = -(-a21 * S[G1]! + a11 * S[G2]!) / det;
-    let accepted = false;
-    for (let k = 0; k < 12; k++) {
-      const trial = residualFixed(w, u, v + dv, r + dr, mass, xcg, lever);
-      if (trial < norm || trial === 0) {
-        v += dv;
-        r += dr;
-        norm = trial;
-        accepted = true;
-        break;
-      }
-      dv /= 2;
-      dr /= 2;
-    }
-    if (!accepted) {
-      residualFixed(w, u, v, r, mass, xcg, lever);
-      break;
-    }
-  }
+  fixedSteer.w = w;
+  fixedSteer.u = u;
+  fixedSteer.mass = mass;
+  fixedSteer.xcg = xcg;
+  fixedSteer.lever = lever;
+  newton2(fixedSteer, state.v, state.r, w.frictionScale(), lever, Infinity);
   state.u = u;
-  state.v = v;
-  state.r = r;
-  state.converged = converged;
-  state.iterations = it;
-}
-
-function residualFixed(
-  w: WheelSet,
-  u: number,
-  v: number,
-  r: number,
-  mass: number,
-  xcg: number,
-  lever: number,
-): number {
-  assemble(w, u, v, r, false);
-  S[G1] = S[G1]! - mass * u * r;
-  S[G2] = S[G2]! - mass * u * r * xcg;
-  const b = S[G2]! / lever;
-  return S[G1]! * S[G1]! + b * b;
+  state.v = NEWTON.a;
+  state.r = NEWTON.b;
+  state.converged = NEWTON.converged;
+  state.iterations = NEWTON.iterations;
 }
 
 /**
  * Fixed path radius R of the origin (r = √(u² + v²)/R): solve the lateral speed v and the
  * steering input p (as the driver steers to follow the radius). Start from state.v, state.p.
+ * The steering input moves at most 0.2 rad per iteration.
  */
 export function solveAtRadius(
   w: WheelSet,
@@ -211,78 +296,21 @@ export function solveAtRadius(
   xcg: number,
   state: SolveState,
 ): void {
-  const scale = w.frictionScale();
   const lever = leverScale(w);
-  let v = state.v;
-  let p = state.p;
-  let norm = residualRadius(w, map, u, v, p, radius, mass, xcg, lever);
-  let it = 0;
-  let converged = false;
-  for (; it < MAX_ITERATIONS && Number.isFinite(norm); it++) {
-    if (Math.abs(S[G1]!) < TOLERANCE * scale && Math.abs(S[G2]!) < TOLERANCE * scale * lever) {
-      converged = true;
-      break;
-    }
-    const speed = Math.sqrt(u * u + v * v);
-    const drdv = v / (radius * speed);
-    const a11 = S[G1V]! + S[G1R]! * drdv - mass * u * drdv;
-    const a12 = S[G1P]!;
-    const a21 = S[G2V]! + S[G2R]! * drdv - mass * u * drdv * xcg;
-    const a22 = S[G2P]!;
-    const det = a11 * a22 - a12 * a21;
-    if (!Number.isFinite(det) || det === 0) break;
-    let dv = -(a22 * S[G1]! - a12 * S[G2]!) / det;
-    let dp = -(-a21 * S[G1]! + a11 * S[G2]!) / det;
-    // Keep steps physical: steering input moves at most 0.2 rad per iteration.
-    if (Math.abs(dp) > 0.2) {
-      const f = 0.2 / Math.abs(dp);
-      dp *= f;
-      dv *= f;
-    }
-    let accepted = false;
-    for (let k = 0; k < 12; k++) {
-      const trial = residualRadius(w, map, u, v + dv, p + dp, radius, mass, xcg, lever);
-      if (trial < norm || trial === 0) {
-        v += dv;
-        p += dp;
-        norm = trial;
-        accepted = true;
-        break;
-      }
-      dv /= 2;
-      dp /= 2;
-    }
-    if (!accepted) {
-      residualRadius(w, map, u, v, p, radius, mass, xcg, lever);
-      break;
-    }
-  }
+  atRadius.w = w;
+  atRadius.map = map;
+  atRadius.u = u;
+  atRadius.radius = radius;
+  atRadius.mass = mass;
+  atRadius.xcg = xcg;
+  atRadius.lever = lever;
+  newton2(atRadius, state.v, state.p, w.frictionScale(), lever, 0.2);
   state.u = u;
-  state.v = v;
-  state.p = p;
-  state.r = Math.sqrt(u * u + v * v) / radius;
-  state.converged = converged;
-  state.iterations = it;
-}
-
-function residualRadius(
-  w: WheelSet,
-  map: SteerMap,
-  u: number,
-  v: number,
-  p: number,
-  radius: number,
-  mass: number,
-  xcg: number,
-  lever: number,
-): number {
-  if (!map.apply(p, w)) return Infinity;
-  const r = Math.sqrt(u * u + v * v) / radius;
-  assemble(w, u, v, r, true);
-  S[G1] = S[G1]! - mass * u * r;
-  S[G2] = S[G2]! - mass * u * r * xcg;
-  const b = S[G2]! / lever;
-  return S[G1]! * S[G1]! + b * b;
+  state.v = NEWTON.a;
+  state.p = NEWTON.b;
+  state.r = Math.sqrt(u * u + NEWTON.a * NEWTON.a) / radius;
+  state.converged = NEWTON.converged;
+  state.iterations = NEWTON.iterations;
 }
 
 /**
