@@ -36,7 +36,8 @@ export function radiusBands(result: TEstimateResult): TRadiusBand[] {
     for (const t of result.turns) {
       if (!t.feasible) continue;
       const r = Number.isFinite(t.radius) ? t.radius : Infinity;
-      if (r < min || r >= max) continue;
+      // The open last band also takes straight crab traverses (infinite radius).
+      if (r < min || (r >= max && max !== Infinity)) continue;
       turnsPerHour += t.perHour;
       energyPerHour += t.energy * t.perHour;
       for (const w of t.wheels) {
