@@ -29,6 +29,8 @@ export {
   type TAngleErrorPoint,
 } from "./steering-comparison";
 
+export { minimumTurningDiameter } from "./minimum-turning-diameter";
+
 // Defaults the UI may show next to user overrides.
 export { DEFAULT_SURFACES } from "./surfaces";
 export { STANDING_CAUTIONS } from "./cautions";

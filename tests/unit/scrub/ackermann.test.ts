@@ -3,6 +3,7 @@ import {
   angleErrorCurve,
   estimate,
   idealSteerAngles,
+  minimumTurningDiameter,
   percentAckermann,
   turningDiameter,
 } from "@/lib/scrub";
@@ -66,6 +67,18 @@ describe("percent Ackermann and turning diameter", () => {
       oneTurn(lowSpeedTurn(R)),
     );
     expect(result.turns[0]?.turningDiameter).toBeCloseTo(td, 9);
+  });
+
+  it("minimum turning diameter on full lock = SAE J695 TD for ideal steering (ISO 7457 sense)", () => {
+    const machine = testMachine({ layout: "ideal", maxLock: 50 }, { track: 1.9, pivotTrack: 1.7 });
+    const L = 2.6;
+    const outer =
+      (Math.atan2(Math.sin(rad(50)), Math.cos(rad(50)) + (1.7 / L) * Math.sin(rad(50))) * 180) /
+      Math.PI;
+    const td = turningDiameter({ wheelbase: L, outerAngle: outer, scrubRadius: 0.1 });
+    expect(minimumTurningDiameter({ machine })).toBeCloseTo(td, 9);
+    const crab = { ...machine, otherSteeringModes: [{ layout: "crab" as const, maxLock: 30 }] };
+    expect(minimumTurningDiameter({ machine: crab, layout: "crab" })).toBeNull();
   });
 
   it("angle-error curve: ideal has zero error, parallel has positive error growing with lock", () => {
