@@ -10,9 +10,9 @@ import { describe, expect, it } from "vitest";
 import { DEMO_DUTY_CYCLES } from "@/lib/demo/duty-cycles";
 import { DEMO_MACHINES } from "@/lib/demo/machines";
 import { estimate } from "@/lib/scrub";
+import { UPDATE_GOLDEN } from "../../support/update-golden";
 
 const GOLDEN_DIR = path.resolve(__dirname, "../../golden");
-const UPDATE = process.env.UPDATE_GOLDEN === "1";
 
 /** Round to 10 significant digits (last-bit differences of Math.* across platforms) and keep
  * NaN / ±Infinity visible, which JSON would otherwise turn into null. */
@@ -38,7 +38,7 @@ describe("golden estimates of the demo machines", () => {
       estimate: estimate(demo.machine, dutyCycle!),
     });
     const file = path.join(GOLDEN_DIR, `${id}.json`);
-    if (UPDATE) {
+    if (UPDATE_GOLDEN) {
       mkdirSync(GOLDEN_DIR, { recursive: true });
       writeFileSync(file, `${JSON.stringify(actual, null, 2)}\n`);
     }
