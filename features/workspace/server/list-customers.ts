@@ -6,7 +6,13 @@ import type { TActor } from "@/lib/authz/actor";
 import type { TCustomerListQuery, TPage } from "@/features/workspace/schemas/list-query";
 import type { TCustomerRow } from "@/features/workspace/schemas/customer";
 import { customerScope } from "@/features/workspace/server/authorize";
-import { likePattern, toPage, iso } from "@/features/workspace/server/paging";
+import {
+  likePattern,
+  pageTotal,
+  toPage,
+  totalColumn,
+  iso,
+} from "@/features/workspace/server/paging";
 
 const sortColumns = {
   name: customers.name,
@@ -31,31 +37,32 @@ export async function listCustomers({
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
 
-  const [rows, [count]] = await Promise.all([
-    db
-      .select({
-        id: customers.id,
-        name: customers.name,
-        kind: customers.kind,
-        contactName: customers.contactName,
-        updatedAt: customers.updatedAt,
-        machineCount: sql<number>`(select count(*)::int from ${machines} where ${machines.customerId} = ${customers.id})`,
-        siteCount: sql<number>`(select count(*)::int from ${sites} where ${sites.customerId} = ${customers.id})`,
-      })
-      .from(customers)
-      .where(where)
-      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
-      .orderBy(order(sortColumns[query.sort]), order(customers.id))
-      .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize),
+  const rows = await db
+    .select({
+      id: customers.id,
+      name: customers.name,
+      kind: customers.kind,
+      contactName: customers.contactName,
+      updatedAt: customers.updatedAt,
+      machineCount: sql<number>`(select count(*)::int from ${machines} where ${machines.customerId} = ${customers.id})`,
+      siteCount: sql<number>`(select count(*)::int from ${sites} where ${sites.customerId} = ${customers.id})`,
+      total: totalColumn(customers, where),
+    })
+    .from(customers)
+    .where(where)
+    // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+    .orderBy(order(sortColumns[query.sort]), order(customers.id))
+    .limit(query.pageSize)
+    .offset((query.page - 1) * query.pageSize);
+  const total = await pageTotal(rows, () =>
     db
       .select({ n: sql<number>`count(*)::int` })
       .from(customers)
       .where(where),
-  ]);
+  );
   return toPage(
-    rows.map((r) => ({ ...r, updatedAt: iso(r.updatedAt) })),
-    count?.n ?? 0,
+    rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: iso(r.updatedAt) })),
+    total,
     query.page,
     query.pageSize,
   );

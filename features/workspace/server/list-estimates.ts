@@ -6,7 +6,7 @@ import type { TActor } from "@/lib/authz/actor";
 import type { TEstimateListQuery, TPage } from "@/features/workspace/schemas/list-query";
 import type { TEstimateRow } from "@/features/workspace/schemas/estimate";
 import { customerScope } from "@/features/workspace/server/authorize";
-import { likePattern, toPage } from "@/features/workspace/server/paging";
+import { likePattern, pageTotal, toPage, totalColumn } from "@/features/workspace/server/paging";
 import { toEstimateRow } from "@/features/workspace/server/estimate-dto";
 
 const sortColumns = {
@@ -38,37 +38,38 @@ export async function listEstimates({
   }
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
-  const [rows, [count]] = await Promise.all([
-    db
-      .select({
-        id: estimates.id,
-        title: estimates.title,
-        customerId: estimates.customerId,
-        customerName: customers.name,
-        machineId: estimates.machineId,
-        machineName: estimates.machineName,
-        dutyCycleName: estimates.dutyCycleName,
-        costPerHour: estimates.costPerHour,
-        hoursToFirstReplacement: estimates.hoursToFirstReplacement,
-        firstToWear: estimates.firstToWear,
-        warningCount: estimates.warningCount,
-        createdAt: estimates.createdAt,
-      })
-      .from(estimates)
-      .leftJoin(customers, eq(customers.id, estimates.customerId))
-      .where(where)
-      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
-      .orderBy(order(sortColumns[query.sort]), order(estimates.id))
-      .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize),
+  const rows = await db
+    .select({
+      id: estimates.id,
+      title: estimates.title,
+      customerId: estimates.customerId,
+      customerName: customers.name,
+      machineId: estimates.machineId,
+      machineName: estimates.machineName,
+      dutyCycleName: estimates.dutyCycleName,
+      costPerHour: estimates.costPerHour,
+      hoursToFirstReplacement: estimates.hoursToFirstReplacement,
+      firstToWear: estimates.firstToWear,
+      warningCount: estimates.warningCount,
+      createdAt: estimates.createdAt,
+      total: totalColumn(estimates, where),
+    })
+    .from(estimates)
+    .leftJoin(customers, eq(customers.id, estimates.customerId))
+    .where(where)
+    // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+    .orderBy(order(sortColumns[query.sort]), order(estimates.id))
+    .limit(query.pageSize)
+    .offset((query.page - 1) * query.pageSize);
+  const total = await pageTotal(rows, () =>
     db
       .select({ n: sql<number>`count(*)::int` })
       .from(estimates)
       .where(where),
-  ]);
+  );
   return toPage(
     rows.map((r) => toEstimateRow(r, r.customerName)),
-    count?.n ?? 0,
+    total,
     query.page,
     query.pageSize,
   );

@@ -6,7 +6,13 @@ import type { TActor } from "@/lib/authz/actor";
 import type { TMachineListQuery, TPage } from "@/features/workspace/schemas/list-query";
 import type { TMachineRow } from "@/features/workspace/schemas/machine";
 import { customerScope } from "@/features/workspace/server/authorize";
-import { iso, likePattern, toPage } from "@/features/workspace/server/paging";
+import {
+  iso,
+  likePattern,
+  pageTotal,
+  toPage,
+  totalColumn,
+} from "@/features/workspace/server/paging";
 
 const sortColumns = {
   name: machines.name,
@@ -38,34 +44,35 @@ export async function listMachines({
   }
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
-  const [rows, [count]] = await Promise.all([
-    db
-      .select({
-        id: machines.id,
-        customerId: machines.customerId,
-        customerName: customers.name,
-        name: machines.name,
-        kind: machines.kind,
-        layout: machines.layout,
-        version: machines.version,
-        updatedAt: machines.updatedAt,
-        estimateCount: sql<number>`(select count(*)::int from ${estimates} where ${estimates.machineId} = ${machines.id})`,
-      })
-      .from(machines)
-      .leftJoin(customers, eq(customers.id, machines.customerId))
-      .where(where)
-      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
-      .orderBy(order(sortColumns[query.sort]), order(machines.id))
-      .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize),
+  const rows = await db
+    .select({
+      id: machines.id,
+      customerId: machines.customerId,
+      customerName: customers.name,
+      name: machines.name,
+      kind: machines.kind,
+      layout: machines.layout,
+      version: machines.version,
+      updatedAt: machines.updatedAt,
+      estimateCount: sql<number>`(select count(*)::int from ${estimates} where ${estimates.machineId} = ${machines.id})`,
+      total: totalColumn(machines, where),
+    })
+    .from(machines)
+    .leftJoin(customers, eq(customers.id, machines.customerId))
+    .where(where)
+    // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+    .orderBy(order(sortColumns[query.sort]), order(machines.id))
+    .limit(query.pageSize)
+    .offset((query.page - 1) * query.pageSize);
+  const total = await pageTotal(rows, () =>
     db
       .select({ n: sql<number>`count(*)::int` })
       .from(machines)
       .where(where),
-  ]);
+  );
   return toPage(
-    rows.map((r) => ({ ...r, updatedAt: iso(r.updatedAt) })),
-    count?.n ?? 0,
+    rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: iso(r.updatedAt) })),
+    total,
     query.page,
     query.pageSize,
   );

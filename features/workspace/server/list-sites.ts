@@ -6,7 +6,7 @@ import type { TActor } from "@/lib/authz/actor";
 import type { TPage, TSiteListQuery } from "@/features/workspace/schemas/list-query";
 import type { TSiteDto } from "@/features/workspace/schemas/site";
 import { customerScope } from "@/features/workspace/server/authorize";
-import { likePattern, toPage } from "@/features/workspace/server/paging";
+import { likePattern, pageTotal, toPage, totalColumn } from "@/features/workspace/server/paging";
 import { toSiteDto } from "@/features/workspace/server/site-dto";
 
 const sortColumns = { name: sites.name, updatedAt: sites.updatedAt } as const;
@@ -27,24 +27,24 @@ export async function listSites({
   if (query.q) filters.push(ilike(sites.name, likePattern(query.q)));
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
-  const [rows, [count]] = await Promise.all([
-    db
-      .select({ site: sites, customerName: customers.name })
-      .from(sites)
-      .innerJoin(customers, eq(customers.id, sites.customerId))
-      .where(where)
-      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
-      .orderBy(order(sortColumns[query.sort]), order(sites.id))
-      .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize),
+  const rows = await db
+    .select({ site: sites, customerName: customers.name, total: totalColumn(sites, where) })
+    .from(sites)
+    .innerJoin(customers, eq(customers.id, sites.customerId))
+    .where(where)
+    // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+    .orderBy(order(sortColumns[query.sort]), order(sites.id))
+    .limit(query.pageSize)
+    .offset((query.page - 1) * query.pageSize);
+  const total = await pageTotal(rows, () =>
     db
       .select({ n: sql<number>`count(*)::int` })
       .from(sites)
       .where(where),
-  ]);
+  );
   return toPage(
     rows.map((r) => toSiteDto(r.site, r.customerName)),
-    count?.n ?? 0,
+    total,
     query.page,
     query.pageSize,
   );

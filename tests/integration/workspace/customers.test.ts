@@ -128,6 +128,12 @@ describe("customers API", () => {
       expect(res.body.items).toHaveLength(4);
     });
 
+    it("past the last page answers no rows with the right total", async () => {
+      const res = await call(list, cookie, "/api/v1/customers?pageSize=10&page=9");
+      expect(res.status).toBe(200);
+      expect(res.body).toMatchObject({ items: [], total: 24, pageCount: 3 });
+    });
+
     it("sorts both ways", async () => {
       const asc = await call(
         list,
