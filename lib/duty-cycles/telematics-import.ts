@@ -3,7 +3,7 @@
  * feeds the turn segmenter, and keeps running totals. Holds no rows, so memory stays flat
  * however long the log is.
  */
-import type { TSurfaceKind } from "@/lib/scrub/schemas";
+import { ZSurfaceKind, type TSurfaceKind } from "@/lib/scrub/schemas";
 import {
   createTurnSegmenter,
   type TDetectedTurn,
@@ -11,7 +11,7 @@ import {
   type TTurnSample,
 } from "@/lib/scrub/segment-turns";
 import type { TColumnMapping, TColumnRef } from "@/lib/duty-cycles/column-mapping";
-import { parseDecimal, parseTime, toSi, formatKmh } from "@/lib/duty-cycles/units";
+import { parseDecimal, parseTime, siFactor, formatKmh } from "@/lib/duty-cycles/units";
 import { parseLoadState, parseReverse, parseSurface } from "@/lib/duty-cycles/surface-names";
 import {
   ImportFailure,
@@ -53,7 +53,27 @@ const MAX_GAP = 10; // s: a longer pause in the log is not operating time (match
 const MAX_YAW_RATE = 360; // deg/s: faster is a sensor fault, no machine spins that fast
 const MAX_ENGINE_SPEED = 20; // m/s: the engine's limit for a turn
 
-type Reader = { ref: TColumnRef; name: string };
+/** Meaning of a text cell, read once per distinct word; consecutive repeats skip the hashing. */
+class WordCache<T> {
+  private readonly known = new Map<string, T | null>();
+  private lastCell: string | undefined;
+  private lastValue: T | null = null;
+  constructor(private readonly parse: (cell: string) => T | undefined) {}
+
+  read(cell: string): T | null {
+    if (cell === this.lastCell) return this.lastValue;
+    let value = this.known.get(cell);
+    if (value === undefined) {
+      value = this.parse(cell) ?? null;
+      if (this.known.size < 1000) this.known.set(cell, value);
+    }
+    this.lastCell = cell;
+    this.lastValue = value;
+    return value;
+  }
+}
+
+type Reader = { ref: TColumnRef; name: string; factor: number };
 
 export function createTelematicsImporter(
   mapping: TColumnMapping,
@@ -63,7 +83,7 @@ export function createTelematicsImporter(
   const { decimal, defaults } = mapping;
   const read = (role: keyof TColumnMapping["columns"]): Reader | undefined => {
     const ref = mapping.columns[role];
-    return ref ? { ref, name: columnName(ref) } : undefined;
+    return ref ? { ref, name: columnName(ref), factor: siFactor(ref.unit) } : undefined;
   };
   const time = read("time");
   const speed = read("speed");
@@ -77,6 +97,7 @@ export function createTelematicsImporter(
   const load = read("load");
   const direction = read("direction");
   const hourMeter = read("hourMeter");
+  const timeIsIso = time.ref.unit === "iso8601";
   const widest = Math.max(...Object.values(mapping.columns).map((c) => c.index)) + 1;
 
   const segmenter = createTurnSegmenter({ wheelbase: defaults.wheelbase, ...options.segment });
@@ -90,7 +111,9 @@ export function createTelematicsImporter(
   let seconds = 0;
   let distance = 0;
   let ladenDistance = 0;
-  const surfaceDistance = new Map<TSurfaceKind, number>();
+  // Distance per surface, indexed like ZSurfaceKind.options; the index changes only with the surface.
+  const surfaceDistance = new Float64Array(ZSurfaceKind.options.length);
+  let prevSurfaceIndex = ZSurfaceKind.options.indexOf(defaults.surface);
   const histogram = new Array<number>(SPEED_BINS).fill(0);
   let firstHours = NaN;
   let lastHours = NaN;
@@ -102,25 +125,13 @@ export function createTelematicsImporter(
     if (cell.length === 0) return undefined;
     const n = parseDecimal(cell, decimal);
     if (Number.isNaN(n) && cell.trim() === "") return undefined;
-    return toSi(n, r.ref.unit);
+    return n * r.factor;
   }
 
   // Text cells repeat the same few words millions of times: read each distinct word once.
-  const surfaceCache = new Map<string, TSurfaceKind | null>();
-  const loadCache = new Map<string, "laden" | "unladen" | null>();
-  const reverseCache = new Map<string, boolean | null>();
-  function cached<T>(
-    cache: Map<string, T | null>,
-    cell: string,
-    read: (c: string) => T | undefined,
-  ) {
-    let v = cache.get(cell);
-    if (v === undefined) {
-      v = read(cell) ?? null;
-      if (cache.size < 1000) cache.set(cell, v);
-    }
-    return v;
-  }
+  const surfaceWords = new WordCache(parseSurface);
+  const loadWords = new WordCache(parseLoadState);
+  const reverseWords = new WordCache(parseReverse);
 
   const reusable: TTurnSample = {
     t: 0,
@@ -146,7 +157,9 @@ export function createTelematicsImporter(
       return;
     }
     const tCell = fields[time!.ref.index]!;
-    const t = parseTime(tCell, time!.ref.unit, decimal);
+    const t = timeIsIso
+      ? parseTime(tCell, "iso8601", decimal)
+      : parseDecimal(tCell, decimal) * time!.factor;
     if (!Number.isFinite(t))
       return log.add(line, time!.name, "is not a time in the chosen unit", tCell);
     if (t < prevT)
@@ -158,7 +171,7 @@ export function createTelematicsImporter(
       );
     if (t === prevT) return log.add(line, time!.name, "repeats the time of the row above", tCell);
     const vCell = fields[speed!.ref.index]!;
-    const v = toSi(parseDecimal(vCell, decimal), speed!.ref.unit);
+    const v = parseDecimal(vCell, decimal) * speed!.factor;
     if (!Number.isFinite(v)) return log.add(line, speed!.name, "is not a number", vCell);
     if (Math.abs(v) > defaults.maxSpeed)
       return log.add(
@@ -232,7 +245,7 @@ export function createTelematicsImporter(
     if (surface) {
       const cell = fields[surface.ref.index]!;
       if (cell.length > 0 && cell.trim() !== "") {
-        const s = cached(surfaceCache, cell, parseSurface);
+        const s = surfaceWords.read(cell);
         if (!s)
           return log.add(
             line,
@@ -247,7 +260,7 @@ export function createTelematicsImporter(
     if (load) {
       const cell = fields[load.ref.index]!;
       if (cell.trim() !== "") {
-        const l = cached(loadCache, cell, parseLoadState);
+        const l = loadWords.read(cell);
         if (!l) return log.add(line, load.name, "is not a load state (laden or empty)", cell);
         laden = l === "laden";
       }
@@ -255,7 +268,7 @@ export function createTelematicsImporter(
     if (direction) {
       const cell = fields[direction.ref.index]!;
       if (cell.trim() !== "") {
-        const r = cached(reverseCache, cell, parseReverse);
+        const r = reverseWords.read(cell);
         if (r === null)
           return log.add(
             line,
@@ -287,14 +300,17 @@ export function createTelematicsImporter(
       seconds += dt;
       distance += ds;
       if (prevLaden) ladenDistance += ds;
-      surfaceDistance.set(prevSurface, (surfaceDistance.get(prevSurface) ?? 0) + ds);
+      surfaceDistance[prevSurfaceIndex]! += ds;
       const bin = Math.min(SPEED_BINS - 1, Math.floor(Math.abs(prevSpeed) / SPEED_BIN_WIDTH));
       histogram[bin]! += dt;
     }
     if (used === 0) logStart = t;
     prevT = t;
     prevSpeed = v;
-    prevSurface = surf;
+    if (surf !== prevSurface) {
+      prevSurface = surf;
+      prevSurfaceIndex = ZSurfaceKind.options.indexOf(surf);
+    }
     prevLaden = laden;
     used++;
     const done = segmenter.push(sample);
@@ -337,7 +353,10 @@ export function createTelematicsImporter(
     const movingSeconds = histogram.reduce((s, x, i) => (i === 0 ? s : s + x), 0);
     const straightSeconds = Math.max(1, movingSeconds - turningSeconds);
     const shares: Partial<Record<TSurfaceKind, number>> = {};
-    for (const [k, d] of surfaceDistance) if (d > 0) shares[k] = d / Math.max(distance, 1e-9);
+    ZSurfaceKind.options.forEach((k, i) => {
+      const d = surfaceDistance[i]!;
+      if (d > 0) shares[k] = d / Math.max(distance, 1e-9);
+    });
     if (Object.keys(shares).length === 0) shares[defaults.surface] = 1;
     return {
       turns,

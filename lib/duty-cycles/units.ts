@@ -69,6 +69,11 @@ export function toSi(value: number, unit: TUnit): number {
   }
 }
 
+/** Every unit here converts to SI by a constant factor: precompute it once per column. */
+export function siFactor(unit: TUnit): number {
+  return toSi(1, unit);
+}
+
 /** Reads a time cell as seconds (elapsed or since the epoch); NaN when unreadable. */
 export function parseTime(text: string, unit: TUnit, decimal: "." | ","): number {
   if (unit === "iso8601") {
