@@ -187,13 +187,13 @@ function percentile(sorted: number[], p: number) {
   return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? NaN;
 }
 
-async function load(path: string, cookie: string) {
+async function load(path: string, cookie: string, connections = CONNECTIONS, duration = DURATION) {
   const latencies: number[] = [];
   let non2xx = 0;
   const result = await autocannon({
     url: `${BASE}${path}`,
-    connections: CONNECTIONS,
-    duration: DURATION,
+    connections,
+    duration,
     headers: { cookie },
     setupClient: (client) => {
       client.on("response", (status: number, _bytes: number, time: number) => {
@@ -271,9 +271,11 @@ async function main() {
     const rows = [];
     for (const path of endpoints) {
       const r = await load(path, cookie);
+      // One client alone: the time a request takes when it does not queue behind others.
+      const solo = await load(path, cookie, 1, 3);
       rows.push(r);
       console.log(
-        `[bench] ${path}: ${r.rps.toFixed(0)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, p99 ${r.p99.toFixed(1)} ms, non-2xx ${r.non2xx}`,
+        `[bench] ${path}: ${r.rps.toFixed(0)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, p99 ${r.p99.toFixed(1)} ms, non-2xx ${r.non2xx}; one client: p50 ${solo.p50.toFixed(1)} ms, p95 ${solo.p95.toFixed(1)} ms`,
       );
     }
 
