@@ -9,7 +9,8 @@ import { fileURLToPath } from "node:url";
 import { DEMO_MACHINES } from "@/lib/demo/machines";
 import { estimate, ZMachine, ZTurn, type TDutyCycleInput, type TTurnKind } from "@/lib/scrub";
 import { prepareMachine } from "@/lib/scrub/machine-model";
-import { solveUnitTurn, type TurnContext } from "@/lib/scrub/solve-turn";
+import { solveUnitTurn } from "@/lib/scrub/solve-turn";
+import { type TurnContext } from "@/lib/scrub/unit-turn";
 import { DEFAULT_SURFACES } from "@/lib/scrub/surfaces";
 
 function machineById(id: string) {

@@ -199,10 +199,12 @@ async function fullIngest() {
   await getPool().end();
   if (row!.status !== "ready") throw new Error(`import failed: ${row!.failureReason}`);
   const jobMs = Number(/: ready in (\d+) ms/.exec(workerLog)?.[1] ?? NaN);
+  const jobDetail = / ms( \(file .*\))/.exec(workerLog)?.[1] ?? "";
   return {
     uploadMs,
     fullMs,
     jobMs,
+    jobDetail,
     workerCpu,
     peak,
     turns: (row!.summary as { turnsPerHour: number }).turnsPerHour * row!.operatingHours!,
@@ -223,7 +225,7 @@ const ours = await best("our parse + segment", 5, async () => {
 });
 const full = await fullIngest();
 console.log(
-  `${"full upload-to-stored-turns".padEnd(44)} ${(full.fullMs / 1000).toFixed(2)} s wall (upload ${(full.uploadMs / 1000).toFixed(2)} s, worker job ${(full.jobMs / 1000).toFixed(2)} s, worker CPU ${full.workerCpu.toFixed(2)} s)`,
+  `${"full upload-to-stored-turns".padEnd(44)} ${(full.fullMs / 1000).toFixed(2)} s wall (upload ${(full.uploadMs / 1000).toFixed(2)} s, worker job ${(full.jobMs / 1000).toFixed(2)} s${full.jobDetail}, worker CPU ${full.workerCpu.toFixed(2)} s)`,
 );
 console.log(`${"worker peak RSS".padEnd(44)} ${full.peak.toFixed(0)} MB`);
 console.log(

@@ -7,6 +7,7 @@ import {
   type TImportJob,
 } from "@/features/duty-cycles/server/import-queue";
 import { runImport } from "@/features/duty-cycles/server/run-import";
+import { warmUpImport } from "@/features/duty-cycles/server/warm-up-import";
 
 /**
  * Works import jobs one at a time per worker (an import is CPU-bound; run more workers, on
@@ -21,6 +22,7 @@ export async function startImportWorker({
   connectionString: string;
   log?: (message: string) => void;
 }): Promise<{ stop: () => Promise<void>; boss: PgBoss }> {
+  await warmUpImport();
   const boss = new PgBoss({ connectionString, max: 3 });
   boss.on("error", (e) => console.error("[worker]", e));
   await boss.start();
@@ -31,8 +33,17 @@ export async function startImportWorker({
     async ([job]) => {
       if (!job) return;
       const started = Date.now();
-      const outcome = await runImport({ db, dutyCycleId: job.data.dutyCycleId });
-      log(`[worker] duty cycle ${job.data.dutyCycleId}: ${outcome} in ${Date.now() - started} ms`);
+      let detail = "";
+      const outcome = await runImport({
+        db,
+        dutyCycleId: job.data.dutyCycleId,
+        onTimings: (t) => {
+          detail = ` (file ${t.parseMs.toFixed(0)} ms, store ${t.storeMs.toFixed(0)} ms)`;
+        },
+      });
+      log(
+        `[worker] duty cycle ${job.data.dutyCycleId}: ${outcome} in ${Date.now() - started} ms${detail}`,
+      );
     },
   );
   return {

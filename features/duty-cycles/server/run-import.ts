@@ -115,9 +115,12 @@ async function parseUpload(
 export async function runImport({
   db,
   dutyCycleId,
+  onTimings,
 }: {
   db: Db;
   dutyCycleId: string;
+  /** Reports how long reading the file and storing the result took (ms). */
+  onTimings?: (t: { parseMs: number; storeMs: number }) => void;
 }): Promise<TRunImportOutcome> {
   const [cycle] = await db.select().from(dutyCycles).where(eq(dutyCycles.id, dutyCycleId));
   if (!cycle || cycle.source === "builder" || !cycle.uploadId || !cycle.mapping) return "skipped";
@@ -150,6 +153,7 @@ export async function runImport({
   try {
     if (!upload) throw new ImportFailure("The uploaded file is no longer stored. Upload it again.");
     const mapping = cycle.mapping as TColumnMapping;
+    const parseStarted = performance.now();
     const result = await parseUpload(
       uploadPath(upload.storagePath),
       upload.sizeBytes,
@@ -157,6 +161,7 @@ export async function runImport({
       onProgress,
     );
     await progressWrite;
+    const storeStarted = performance.now();
     const summary = summariseDutyCycle({
       turns: result.turns,
       straight: result.straight,
@@ -187,6 +192,10 @@ export async function runImport({
           updatedAt: new Date(),
         })
         .where(eq(dutyCycles.id, dutyCycleId));
+    });
+    onTimings?.({
+      parseMs: storeStarted - parseStarted,
+      storeMs: performance.now() - storeStarted,
     });
     return "ready";
   } catch (e) {
