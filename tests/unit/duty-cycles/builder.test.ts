@@ -57,7 +57,8 @@ describe("headland turns close onto the next pass", () => {
     expect(notes[0]).toMatch(/Cultivating: a loop turn needs/);
   });
 
-  it("an omega at zero spacing is the textbook 60°-300°-60° turn", () => {
+  // Three equal circles mutually tangent: their centres form an equilateral triangle, so 60°.
+  it("an omega at zero spacing is the 60°-300°-60° turn of three tangent circles", () => {
     const turn = headlandTurnArcs("bulb", 0, 5, [], "t");
     expect(turn.arcs.map((a) => a.headingChange)).toEqual([
       expect.closeTo(60, 9),

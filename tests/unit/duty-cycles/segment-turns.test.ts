@@ -36,7 +36,7 @@ const noiseBySource = {
   "yaw rate": { yawRate: 0.8, speed: 0.05 },
   "steer angle": { steer: 0.5, speed: 0.05 },
   "compass heading": { heading: 0.8, speed: 0.05 },
-  // About what a tractor guidance receiver gives; a plain phone-grade fix is worse.
+  // 5 cm: about what a corrected tractor guidance receiver gives (from memory, no source).
   "GPS positions": { position: 0.05, speed: 0.05 },
 } as const;
 
@@ -179,7 +179,7 @@ describe("segmentTurns on generated paths with known turns", () => {
         { kind: "straight", distance: 20, speed: 2 },
       ],
     });
-    // Receiver wander of ±1 m while stopped or creeping (typical of an uncorrected fix).
+    // Receiver wander of about 1 m while stopped or creeping, as an uncorrected fix shows (from memory).
     const random = seededRandom(13);
     const metre = 1 / 111_320;
     const turns = segmentTurns(
