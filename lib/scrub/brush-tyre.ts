@@ -4,7 +4,7 @@ import { toRadians } from "./angles";
  * Lateral force of the isotropic brush model with parabolic pressure (Pacejka, Tire and Vehicle
  * Dynamics ch. 3 [M]; PHYSICS.md §5.5), as a function of σ = tan α:
  *   θ = C_α/(3 μ F_z);  F = μ F_z (3θ|σ| − 3(θσ)² + (θ|σ|)³) sign σ  for θ|σ| < 1, else μ F_z sign σ.
- * Writes nothing, allocates nothing: the inner loops call this.
+ * The solver loop (turn-solver.ts) inlines the same law together with its slope.
  */
 export function brushForce(
   sigma: number,
@@ -17,21 +17,6 @@ export function brushForce(
   const t = (stiffness / (3 * muFz)) * Math.abs(sigma);
   const magnitude = t >= 1 ? muFz : muFz * (3 * t - 3 * t * t + t * t * t);
   return sigma < 0 ? -magnitude : magnitude;
-}
-
-/** dF/dσ of {@link brushForce}: C_α(1 − θ|σ|)² in adhesion, 0 in full sliding. */
-export function brushForceSlope(
-  sigma: number,
-  load: number,
-  stiffness: number,
-  friction: number,
-): number {
-  const muFz = friction * load;
-  if (muFz <= 0) return 0;
-  const t = (stiffness / (3 * muFz)) * Math.abs(sigma);
-  if (t >= 1) return 0;
-  const u = 1 - t;
-  return stiffness * u * u;
 }
 
 /**

@@ -1,5 +1,3 @@
-import { brushForce, brushForceSlope } from "./brush-tyre";
-
 /**
  * Preallocated per-wheel state for the turn solvers (structure of arrays, no allocation in the
  * Newton loops). Positions are tyre contact centres in the body frame (m), steer in rad,
@@ -49,20 +47,6 @@ export class WheelSet {
     this.steer[i] = delta;
     this.sinSteer[i] = Math.sin(delta);
     this.cosSteer[i] = Math.cos(delta);
-  }
-
-  tyreForce(i: number, sigma: number): number {
-    const load = this.load[i] ?? 0;
-    const stiffness = this.stiffness[i] ?? 0;
-    return this.brush
-      ? brushForce(sigma, load, stiffness, this.friction[i] ?? 0)
-      : stiffness * sigma;
-  }
-
-  tyreSlope(i: number, sigma: number): number {
-    const load = this.load[i] ?? 0;
-    const stiffness = this.stiffness[i] ?? 0;
-    return this.brush ? brushForceSlope(sigma, load, stiffness, this.friction[i] ?? 0) : stiffness;
   }
 
   /** Sum of μ·F_z (N): scale for force residuals. */

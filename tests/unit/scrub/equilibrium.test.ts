@@ -1,5 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { equilibriumTurn, idealSteerAngles, type TEquilibriumWheelInput } from "@/lib/scrub";
+import {
+  brushTyre,
+  equilibriumTurn,
+  idealSteerAngles,
+  type TEquilibriumWheelInput,
+} from "@/lib/scrub";
 import { fmin } from "./fmin";
 
 const rad = (d: number) => (d * Math.PI) / 180;
@@ -68,6 +73,21 @@ describe("equilibrium turning centre", () => {
     const [fy, mz] = balance(input, r.centre.x, r.centre.y);
     expect(Math.abs(fy)).toBeLessThan(1e-6);
     expect(Math.abs(mz)).toBeLessThan(1e-6);
+  });
+
+  it("the solver's tyre forces are the brush law at the solved slip angles (Pacejka [from memory])", () => {
+    const input = wheels({ inner: 35, outer: 35 });
+    const r = equilibriumTurn({ wheels: input, tyre: "brush", headingChange: 90 });
+    r.wheels.forEach((w, i) => {
+      const wheel = input[i]!;
+      const ref = brushTyre({
+        load: wheel.load,
+        corneringStiffness: wheel.corneringStiffness,
+        friction: wheel.friction,
+        slip: w.slip,
+      });
+      expect(w.lateralForce).toBeCloseTo(ref.lateralForce, 6);
+    });
   });
 
   it("scrub and energy per wheel follow s = ρ|sin α|Δψ and E = |F|·s", () => {
