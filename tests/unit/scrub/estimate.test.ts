@@ -66,6 +66,23 @@ describe("estimate warnings and cautions", () => {
     expect(() => estimate(unparsed, oneTurn(lowSpeedTurn(8)))).toThrow(/front axle.*aspect ratio/);
   });
 
+  it("names every invalid turn kind by its index and loses nothing else", () => {
+    const cycle = oneTurn(lowSpeedTurn(8));
+    const turns = [...cycle.turns, { turn: { ...lowSpeedTurn(8), surface: "ice" }, perHour: 1 }];
+    turns.push({ turn: lowSpeedTurn(6), perHour: -2 });
+    expect(() => estimate(testMachine(), { ...cycle, turns } as typeof cycle)).toThrow(
+      /turns\[1\][\s\S]*surface[\s\S]*turns\[2\][\s\S]*perHour/,
+    );
+  });
+
+  it("an empty duty cycle predicts no wear, no life and no cost", () => {
+    const result = estimate(testMachine(), { ...oneTurn(lowSpeedTurn(8)), turns: [] });
+    expect(result.turns).toEqual([]);
+    expect(result.firstToWear).toBeNull();
+    expect(result.costPerHour).toBe(0);
+    expect(result.positions.every((p) => p.hoursToReplacement === null)).toBe(true);
+  });
+
   it("reports a steering mode the machine lacks", () => {
     const result = estimate(testMachine(), oneTurn(lowSpeedTurn(8, { steeringMode: "crab" })));
     expect(result.turns[0]!.feasible).toBe(false);
