@@ -50,12 +50,14 @@ export interface TurnContext {
 /** Solved (left-turn) wheel order → result order for a mirrored (right) turn. */
 export const MIRROR = [1, 0, 3, 2] as const;
 
+/** A zeroed field array; filled with a non-integer first so V8 stores it as unboxed doubles. */
 function newWheelFields(): number[] {
   const out = new Array<number>(4 * FIELDS);
   for (let i = 0; i < out.length; i++) out[i] = 0.5;
   for (let i = 0; i < out.length; i++) out[i] = 0;
   return out;
 }
+
 /** Shared solver state (one turn is solved at a time). */
 export const state: SolveState = newSolveState();
 
