@@ -258,7 +258,7 @@ async function main() {
       "/api/v1/machines?pageSize=25&sort=name",
       "/api/v1/estimates?pageSize=25&sort=createdAt&dir=desc",
       "/api/v1/estimates?pageSize=25&page=200&sort=costPerHour&dir=desc",
-      "/api/v1/machines?pageSize=25&q=trapezoid&sort=updatedAt&dir=desc",
+      "/api/v1/machines?pageSize=25&layout=trapezoid&q=row-crop&sort=updatedAt&dir=desc",
       "/api/v1/search?q=ridge",
     ];
     // One short untimed pass so the server's code paths are compiled before measuring.
