@@ -6,26 +6,10 @@ import { readCsvRows } from "@/features/duty-cycles/server/read-csv-rows";
 import { createTelematicsImporter } from "@/lib/duty-cycles/telematics-import";
 import { createTurnSegmenter } from "@/lib/scrub/segment-turns";
 import { parseDecimal } from "@/lib/duty-cycles/units";
+import { BENCH_MAPPING } from "./ingest-mapping";
 
 const FILE = "var/bench/ingest-1000000.csv";
 const open = () => createReadStream(FILE, { encoding: "utf8", highWaterMark: 256 * 1024 });
-const MAPPING = {
-  kind: "telematics",
-  delimiter: ",",
-  decimal: ".",
-  hasHeader: true,
-  encoding: "utf-8",
-  columns: {
-    time: { index: 0, unit: "s" },
-    speed: { index: 1, unit: "km/h" },
-    yawRate: { index: 2, unit: "deg/s" },
-    lat: { index: 3, unit: "deg" },
-    lon: { index: 4, unit: "deg" },
-    surface: { index: 5, unit: "text" },
-    direction: { index: 6, unit: "text" },
-  },
-  defaults: { surface: "firm-soil", loadState: "unladen", shiftHours: 8, maxSpeed: 25 },
-} as const;
 
 async function time(label: string, f: () => Promise<unknown>) {
   let best = Infinity;
@@ -74,7 +58,7 @@ await time("readCsvRows + segmenter only", () => {
   });
 });
 await time("full importer", async () => {
-  const imp = createTelematicsImporter(MAPPING as never);
+  const imp = createTelematicsImporter(BENCH_MAPPING);
   await readCsvRows({ input: open(), delimiter: ",", hasHeader: true, onRecord: imp.pushRow });
   imp.finish();
 });

@@ -8,30 +8,13 @@ import { Readable } from "node:stream";
 import os from "node:os";
 import Papa from "papaparse";
 import { eq } from "drizzle-orm";
+import { BENCH_MAPPING } from "./ingest-mapping";
 
 const ROWS = Number(process.env.BENCH_ROWS ?? 1_000_000);
 const FILE = `var/bench/ingest-${ROWS}.csv`;
 process.env.DATABASE_URL ??= "postgres://postgres@127.0.0.1:54329/tc_bench";
 process.env.UPLOAD_DIR ??= "var/bench/uploads";
 process.env.UPLOAD_LIMIT_BYTES ??= String(200 * 1024 * 1024);
-
-const MAPPING = {
-  kind: "telematics",
-  delimiter: ",",
-  decimal: ".",
-  hasHeader: true,
-  encoding: "utf-8",
-  columns: {
-    time: { index: 0, header: "time", unit: "s" },
-    speed: { index: 1, header: "speed_kmh", unit: "km/h" },
-    yawRate: { index: 2, header: "yaw_rate_dps", unit: "deg/s" },
-    lat: { index: 3, header: "lat", unit: "deg" },
-    lon: { index: 4, header: "lon", unit: "deg" },
-    surface: { index: 5, header: "surface", unit: "text" },
-    direction: { index: 6, header: "gear", unit: "text" },
-  },
-  defaults: { surface: "firm-soil", loadState: "unladen", shiftHours: 8, maxSpeed: 25 },
-} as const;
 
 const ms = (t0: bigint) => Number(process.hrtime.bigint() - t0) / 1e6;
 
@@ -64,7 +47,7 @@ function bareParse(): Promise<number> {
 async function ourParse() {
   const { readCsvRows } = await import("@/features/duty-cycles/server/read-csv-rows");
   const { createTelematicsImporter } = await import("@/lib/duty-cycles/telematics-import");
-  const importer = createTelematicsImporter(MAPPING as never);
+  const importer = createTelematicsImporter(BENCH_MAPPING);
   await readCsvRows({
     input: createReadStream(FILE, { encoding: "utf8", highWaterMark: 256 * 1024 }),
     delimiter: ",",
@@ -179,7 +162,7 @@ async function fullIngest() {
       name: "Bench log",
       customerId: customer!.id,
       uploadId: upload.id,
-      mapping: MAPPING,
+      mapping: BENCH_MAPPING,
     },
     enqueue: enqueueImport,
   });

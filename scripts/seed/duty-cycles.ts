@@ -11,6 +11,7 @@ import { summariseDutyCycle } from "@/lib/duty-cycles/summarise";
 import { createTelematicsImporter } from "@/lib/duty-cycles/telematics-import";
 import { samplePath, type TPathLeg } from "@/lib/duty-cycles/synthetic-path";
 import type { TStoredTurn, TStraight } from "@/lib/duty-cycles/stored-duty-cycle";
+import { toTurnRow } from "@/features/duty-cycles/server/turn-rows";
 
 const preset = (key: string): TBuilderInput =>
   structuredClone(BUILDER_PRESETS.find((p) => p.key === key)!.input);
@@ -236,25 +237,7 @@ export async function seedDutyCycles(
           processedAt: new Date(),
         })
         .returning({ id: dutyCycles.id });
-      await tx.insert(dutyCycleTurns).values(
-        c.turns.map((t) => ({
-          dutyCycleId: row!.id,
-          seq: t.seq,
-          label: t.label,
-          direction: t.direction,
-          radius: t.radius,
-          steerInput: t.steerInput,
-          headingChange: t.headingChange,
-          speed: t.speed,
-          perHour: t.perHour,
-          surface: t.surface,
-          loadState: t.loadState,
-          reverse: t.reverse ? 1 : 0,
-          distance: t.distance,
-          duration: t.duration,
-          startTime: t.startTime,
-        })),
-      );
+      await tx.insert(dutyCycleTurns).values(c.turns.map((t) => toTurnRow(row!.id, t)));
       return row!.id;
     });
   }

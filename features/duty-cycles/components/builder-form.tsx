@@ -21,6 +21,7 @@ import { Input, Select } from "@/lib/ui/input";
 import { toast } from "@/lib/ui/toast";
 import { useCreateDutyCycle } from "@/features/duty-cycles/api/duty-cycles";
 import { ZBuilderInput } from "@/features/duty-cycles/schemas/builder";
+import { NameAndCustomer } from "@/features/duty-cycles/components/name-and-customer";
 import { DutyCycleSummary } from "@/features/duty-cycles/components/duty-cycle-summary";
 
 const KMH = 3.6;
@@ -430,25 +431,14 @@ export function BuilderForm({ customers }: { customers: { id: string; name: stri
         </Card>
       ) : null}
       <Card title="Save">
-        <div className="grid gap-3 sm:grid-cols-2">
-          <Field label="Duty cycle name">
-            <Input value={name} maxLength={120} onChange={(e) => setName(e.target.value)} />
-          </Field>
-          <Field label="Customer">
-            <Select value={customerId} onChange={(e) => setCustomerId(e.target.value)}>
-              {customers.map((c) => (
-                <option key={c.id} value={c.id}>
-                  {c.name}
-                </option>
-              ))}
-            </Select>
-          </Field>
-        </div>
-        {create.error ? (
-          <p role="alert" className="mt-3 text-sm text-danger-700">
-            {create.error.message}
-          </p>
-        ) : null}
+        <NameAndCustomer
+          name={name}
+          onName={setName}
+          customerId={customerId}
+          onCustomer={setCustomerId}
+          customers={customers}
+          error={create.error}
+        />
         <div className="mt-4 flex justify-end">
           <Button
             disabled={!parsed.success || !name.trim() || !customerId}

@@ -23,6 +23,7 @@ import {
 } from "@/features/duty-cycles/api/mapping-templates";
 import { useUploadFile } from "@/features/duty-cycles/api/upload-file";
 import { ColumnMappingEditor } from "@/features/duty-cycles/components/column-mapping-editor";
+import { NameAndCustomer } from "@/features/duty-cycles/components/name-and-customer";
 import { ProgressBar } from "@/features/duty-cycles/components/progress-bar";
 import { readPreview, type TPreview } from "@/features/duty-cycles/components/read-preview";
 
@@ -415,25 +416,14 @@ export function UploadWizard({
 
       {preview && preview.rows.length > 0 ? (
         <Card title="3. Name it and import">
-          <div className="grid gap-3 sm:grid-cols-2">
-            <Field label="Duty cycle name">
-              <Input value={name} onChange={(e) => setName(e.target.value)} maxLength={120} />
-            </Field>
-            <Field label="Customer">
-              <Select value={customerId} onChange={(e) => setCustomerId(e.target.value)}>
-                {customers.map((c) => (
-                  <option key={c.id} value={c.id}>
-                    {c.name}
-                  </option>
-                ))}
-              </Select>
-            </Field>
-          </div>
-          {create.error ? (
-            <p role="alert" className="mt-3 text-sm text-danger-700">
-              {create.error.message}
-            </p>
-          ) : null}
+          <NameAndCustomer
+            name={name}
+            onName={setName}
+            customerId={customerId}
+            onCustomer={setCustomerId}
+            customers={customers}
+            error={create.error}
+          />
           <div className="mt-4 flex justify-end">
             <Button
               disabled={!uploaded || problems.length > 0 || !name.trim() || !customerId}

@@ -13,6 +13,7 @@ import { summariseDutyCycle } from "@/lib/duty-cycles/summarise";
 import type { TStoredTurn } from "@/lib/duty-cycles/stored-duty-cycle";
 import { readCsvRows } from "@/features/duty-cycles/server/read-csv-rows";
 import { uploadPath } from "@/features/duty-cycles/server/upload-storage";
+import { toTurnRow } from "@/features/duty-cycles/server/turn-rows";
 
 const PROGRESS_EVERY_MS = 500;
 const INSERT_BATCH = 1000;
@@ -30,25 +31,9 @@ async function replaceContents(
   await tx.delete(dutyCycleTurns).where(eq(dutyCycleTurns.dutyCycleId, dutyCycleId));
   await tx.delete(dutyCycleImportErrors).where(eq(dutyCycleImportErrors.dutyCycleId, dutyCycleId));
   for (let i = 0; i < turns.length; i += INSERT_BATCH) {
-    await tx.insert(dutyCycleTurns).values(
-      turns.slice(i, i + INSERT_BATCH).map((t) => ({
-        dutyCycleId,
-        seq: t.seq,
-        label: t.label,
-        direction: t.direction,
-        radius: t.radius,
-        steerInput: t.steerInput,
-        headingChange: t.headingChange,
-        speed: t.speed,
-        perHour: t.perHour,
-        surface: t.surface,
-        loadState: t.loadState,
-        reverse: t.reverse ? 1 : 0,
-        distance: t.distance,
-        duration: t.duration,
-        startTime: t.startTime,
-      })),
-    );
+    await tx
+      .insert(dutyCycleTurns)
+      .values(turns.slice(i, i + INSERT_BATCH).map((t) => toTurnRow(dutyCycleId, t)));
   }
   const rows = errors.map((e) => ({ dutyCycleId, ...e, truncated: false }));
   if (errorCount > errors.length)
