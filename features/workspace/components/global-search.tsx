@@ -38,8 +38,19 @@ export function GlobalSearch() {
           setText(e.target.value);
           setOpen(true);
         }}
-        onBlur={() => setTimeout(() => setOpen(false), 150)}
-        onKeyDown={(e) => e.key === "Escape" && setOpen(false)}
+        onBlur={(e) => {
+          // Keep the list open while focus moves into it.
+          const next = e.relatedTarget as Node | null;
+          if (!next || !e.currentTarget.form?.contains(next)) setTimeout(() => setOpen(false), 150);
+        }}
+        onKeyDown={(e) => {
+          if (e.key === "Escape") setOpen(false);
+          if (e.key === "ArrowDown") {
+            // Down arrow moves into the results; Tab and the arrows move between them.
+            e.preventDefault();
+            document.querySelector<HTMLAnchorElement>(`[id="${id}-results"] a`)?.focus();
+          }
+        }}
         placeholder="Search customers, machines"
         className="h-9 w-48 rounded-md border border-ink-300 bg-white px-3 text-sm sm:w-64"
         role="combobox"
@@ -50,6 +61,18 @@ export function GlobalSearch() {
       {open && q.length >= 2 ? (
         <ul
           id={`${id}-results`}
+          onBlur={(e) => {
+            const next = e.relatedTarget as Node | null;
+            if (!next || !e.currentTarget.parentElement?.contains(next)) setOpen(false);
+          }}
+          onKeyDown={(e) => {
+            const links = [...e.currentTarget.querySelectorAll("a")];
+            const at = links.indexOf(document.activeElement as HTMLAnchorElement);
+            if (e.key === "ArrowDown") links[Math.min(links.length - 1, at + 1)]?.focus();
+            if (e.key === "ArrowUp") links[Math.max(0, at - 1)]?.focus();
+            if (e.key === "Escape") setOpen(false);
+            if (["ArrowDown", "ArrowUp"].includes(e.key)) e.preventDefault();
+          }}
           className="absolute right-0 z-30 mt-1 w-80 overflow-hidden rounded-md border border-ink-200 bg-white shadow-lg"
         >
           {search.isPending ? <li className="px-3 py-2 text-sm text-ink-600">Searching…</li> : null}
