@@ -1,23 +1,11 @@
 import { SURFACE_KINDS } from "./surfaces";
-import type { TTurn } from "./schemas";
+import { STEERING_LAYOUTS, type TTurn } from "./schemas";
 import { copyUnitTurn, type UnitTurn } from "./unit-turn";
 
 const CACHE_LIMIT = 4096;
 const SURFACE_INDEX = new Map(SURFACE_KINDS.map((s, i) => [s, i]));
 
-const LAYOUT_CODES = new Map<string, number>(
-  [
-    "ideal",
-    "trapezoid",
-    "parallel",
-    "turntable",
-    "articulated",
-    "rear",
-    "four-wheel",
-    "crab",
-    "skid",
-  ].map((l, i) => [l, i]),
-);
+const LAYOUT_CODES = new Map<string, number>(STEERING_LAYOUTS.map((l, i) => [l, i]));
 
 /**
  * Solved turns keyed by everything that changes the solve (not heading change, count, crab
