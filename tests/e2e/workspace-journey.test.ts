@@ -58,6 +58,19 @@ describe("workspace journey", () => {
     const customerId = page.url().split("/").pop()!;
     await page.getByRole("heading", { name: customerName }).waitFor();
 
+    // The header search finds the new customer; the keyboard alone opens it.
+    await page.goto(`${baseUrl}/dashboard`);
+    await page
+      .getByRole("combobox", { name: "Search customers and machines" })
+      .fill(`Thornbury Fen Farm ${tag}`);
+    await page
+      .getByRole("search")
+      .getByRole("link", { name: new RegExp(customerName) })
+      .waitFor();
+    await page.keyboard.press("ArrowDown");
+    await page.keyboard.press("Enter");
+    await page.waitForURL(`${baseUrl}/customers/${customerId}`);
+
     // 2. Machine with a track-rod (trapezoid) linkage; the geometry view follows the form.
     await page.getByRole("link", { name: "Add a machine" }).click();
     await page.waitForURL(/\/machines\/new/);
