@@ -155,4 +155,31 @@ describe("workspace journey", () => {
     expect(parsed.every((r) => !r.label!.startsWith("="))).toBe(true);
     await context.close();
   });
+
+  it("a customer account sees only its own records, read-only, and no templates", async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    await signIn(page, "morwenna@hollinvale.test");
+    await page.goto(`${baseUrl}/customers`);
+    await page.waitForURL(/\/customers\/[0-9a-f-]{36}$/);
+    await page.getByRole("heading", { name: "Hollin Vale Farm" }).waitFor();
+    expect(await page.getByRole("button", { name: "Save customer" }).count()).toBe(0);
+
+    await page.goto(`${baseUrl}/machines`);
+    const machineLinks = page.getByRole("table").getByRole("link");
+    await machineLinks.first().waitFor();
+    const names = await machineLinks.allTextContents();
+    expect(names.length).toBeGreaterThan(0);
+    expect(names.every((n) => n.startsWith("Hollin Vale"))).toBe(true);
+    expect(await page.getByRole("link", { name: "Add a machine" }).count()).toBe(0);
+
+    await machineLinks.first().click();
+    await page.getByTestId("geometry-view").waitFor();
+    expect(await page.getByLabel(/^Wheelbase/).isDisabled()).toBe(true);
+    expect(await page.getByRole("button", { name: "Save machine" }).count()).toBe(0);
+
+    await page.goto(`${baseUrl}/machines/templates`);
+    await page.waitForURL(`${baseUrl}/machines`);
+    await context.close();
+  });
 });
