@@ -58,6 +58,15 @@ describe("duty-cycle upload journey", () => {
     await page.getByLabel("Surface column").selectOption({ label: "4: ground" });
     await expect(page.getByText("The mapping is not complete yet").count()).resolves.toBe(0);
 
+    // Save the mapping for the next file from this logger; it is listed for the dealership.
+    const templateName = `Drill logger ${uniqueTag()}`;
+    await page.getByLabel("Save this mapping as a template").fill(templateName);
+    await page.getByRole("button", { name: "Save template" }).click();
+    await page
+      .locator("section", { hasText: "Saved column mappings" })
+      .getByText(templateName)
+      .waitFor();
+
     const name = `Drilling log ${uniqueTag()}`;
     await page.getByLabel("Duty cycle name").fill(name);
     await page.getByLabel("Customer", { exact: true }).selectOption({ label: "Hollin Vale Farm" });

@@ -1,6 +1,7 @@
 import { redirect } from "next/navigation";
 import { getActor } from "@/features/auth/server/get-actor";
 import { UploadWizard } from "@/features/duty-cycles/components/upload-wizard";
+import { MappingTemplatesPanel } from "@/features/duty-cycles/components/mapping-templates-panel";
 import { can } from "@/lib/authz/policy";
 import { getEnv } from "@/lib/env";
 import { EmptyState } from "@/lib/ui/empty-state";
@@ -19,7 +20,10 @@ export default async function UploadDutyCyclePage() {
       {customers.length === 0 ? (
         <EmptyState title="Add a customer first">A duty cycle belongs to a customer.</EmptyState>
       ) : (
-        <UploadWizard customers={customers} uploadLimitBytes={getEnv().UPLOAD_LIMIT_BYTES} />
+        <>
+          <UploadWizard customers={customers} uploadLimitBytes={getEnv().UPLOAD_LIMIT_BYTES} />
+          <MappingTemplatesPanel />
+        </>
       )}
     </div>
   );
