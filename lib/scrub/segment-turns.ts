@@ -287,9 +287,12 @@ function plateauRate(rates: readonly number[], n: number): number {
   return sorted[Math.floor(sorted.length * 0.9)] ?? 0;
 }
 
+/** What push() returns for the many samples that finish no turn: shared, never changed. */
+const NO_TURNS: readonly TDetectedTurn[] = Object.freeze([]);
+
 export type TTurnSegmenter = {
   /** Feeds one sample; returns the turns that finished with it (usually none). */
-  push(sample: TTurnSample): TDetectedTurn[];
+  push(sample: TTurnSample): readonly TDetectedTurn[];
   /** Ends the log; returns the turns still open. */
   finish(): TDetectedTurn[];
 };
@@ -320,7 +323,7 @@ class Segmenter implements TTurnSegmenter {
     this.half = o.smoothingWindow / 2;
   }
 
-  push(sample: TTurnSample): TDetectedTurn[] {
+  push(sample: TTurnSample): readonly TDetectedTurn[] {
     const step = this.tracker.step(sample);
     if (step.restart) this.restart();
     const r = this.ring;
@@ -336,7 +339,7 @@ class Segmenter implements TTurnSegmenter {
     this.tail++;
     this.drain(false);
     // Most samples finish no turn: skip allocating an empty array for each of them.
-    if (this.out.length === 0) return [];
+    if (this.out.length === 0) return NO_TURNS;
     const done = this.out;
     this.out = [];
     return done;
