@@ -6,6 +6,8 @@ import { ZSurfaceKind, type TSurfaceKind } from "@/lib/scrub/schemas";
 import {
   mappingProblems,
   type TColumnMapping,
+  type TColumnRef,
+  type TColumnRole,
   type TFileKind,
 } from "@/lib/duty-cycles/column-mapping";
 import { guessColumns, guessDecimal, guessKind } from "@/lib/duty-cycles/guess-mapping";
@@ -142,7 +144,15 @@ export function UploadWizard({
     if (!t) return;
     setTemplateApplied(true);
     setDelimiterChoice(t.mapping.delimiter);
-    setMapping({ ...t.mapping });
+    // Match the template's columns by name where this file names them: exports from the same
+    // source sometimes add or move a column.
+    const byName = new Map(headers.map((h, i) => [h.trim().toLowerCase(), i]));
+    const columns: TColumnMapping["columns"] = {};
+    for (const [role, ref] of Object.entries(t.mapping.columns) as [TColumnRole, TColumnRef][]) {
+      const index = ref.header ? byName.get(ref.header.trim().toLowerCase()) : undefined;
+      columns[role] = { ...ref, index: index ?? ref.index };
+    }
+    setMapping({ ...t.mapping, columns });
     toast.success(`Template "${t.name}" applied.`);
   }
 

@@ -108,7 +108,20 @@ export async function createDutyCycle({
       createdById: actor.userId,
     })
     .returning();
-  const jobId = await enqueue(row!.id);
-  await db.update(dutyCycles).set({ jobId }).where(eq(dutyCycles.id, row!.id));
-  return toDutyCycleRow(row!, customer!.name);
+  try {
+    const jobId = await enqueue(row!.id);
+    await db.update(dutyCycles).set({ jobId }).where(eq(dutyCycles.id, row!.id));
+    return toDutyCycleRow(row!, customer!.name);
+  } catch (e) {
+    // Never leave a cycle waiting for a job that does not exist: mark it failed, retry re-queues.
+    const [failed] = await db
+      .update(dutyCycles)
+      .set({
+        status: "failed",
+        failureReason: `The import could not be queued (${(e as Error).message}). Retry in a moment.`,
+      })
+      .where(eq(dutyCycles.id, row!.id))
+      .returning();
+    return toDutyCycleRow(failed!, customer!.name);
+  }
 }

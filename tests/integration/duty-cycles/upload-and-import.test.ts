@@ -18,6 +18,7 @@ import { GET as badRows } from "@/app/api/v1/duty-cycles/[id]/bad-rows/route";
 import { startImportWorker } from "@/features/duty-cycles/server/import-worker";
 import { getImportSender } from "@/features/duty-cycles/server/import-queue";
 import { runImport } from "@/features/duty-cycles/server/run-import";
+import { createDutyCycle } from "@/features/duty-cycles/server/create-duty-cycle";
 import {
   KNOWN_TURNS,
   TELEMATICS_MAPPING,
@@ -197,6 +198,27 @@ describe("duty-cycle upload and import", () => {
       (r) => r.body.status === "failed" && r.body.attempts === 2,
     );
     expect(refailed.body.failureReason).toMatch(/no usable rows/);
+  });
+
+  it("marks the duty cycle failed, with a reason, when the queue cannot take the job", async () => {
+    const up = await uploadText(knownTelematicsCsv().csv);
+    const row = await createDutyCycle({
+      db,
+      actor: estimator.actor,
+      input: {
+        source: "upload",
+        name: "Queue down",
+        customerId,
+        uploadId: up.body.id,
+        mapping: TELEMATICS_MAPPING,
+      },
+      enqueue: async () => {
+        throw new Error("connection refused");
+      },
+    });
+    expect(row.status).toBe("failed");
+    const got = await detail(row.id);
+    expect(got.body.failureReason).toMatch(/could not be queued \(connection refused\)/);
   });
 
   it("keeps other dealerships out and checks roles", async () => {
