@@ -9,6 +9,8 @@ import {
   type TBuilderBlock,
   type TBuilderInput,
   type THeadlandTurn,
+  type TYardBlock,
+  type TYardTurn,
 } from "@/lib/duty-cycles/builder";
 import { BUILDER_PRESETS } from "@/lib/duty-cycles/builder-presets";
 import { summariseDutyCycle } from "@/lib/duty-cycles/summarise";
@@ -74,6 +76,8 @@ function BlockEditor({
   onRemove: () => void;
 }) {
   const set = (patch: Partial<TBuilderBlock>) => onChange({ ...block, ...patch } as TBuilderBlock);
+  const setTurn = (yard: TYardBlock, i: number, patch: Partial<TYardTurn>) =>
+    set({ turns: yard.turns.map((x, j) => (j === i ? { ...x, ...patch } : x)) });
   return (
     <fieldset className="rounded-md border border-ink-200 p-4">
       <legend className="px-1 text-sm font-medium text-ink-800">
@@ -179,35 +183,19 @@ function BlockEditor({
                       label={`Turn ${i + 1} heading change`}
                       unit="°"
                       value={t.headingChange}
-                      onChange={(v) =>
-                        set({
-                          turns: block.turns.map((x, j) =>
-                            j === i ? { ...x, headingChange: v } : x,
-                          ),
-                        })
-                      }
+                      onChange={(v) => setTurn(block, i, { headingChange: v })}
                     />
                     <NumberField
                       label="Radius"
                       unit="m"
                       value={t.radius}
-                      onChange={(v) =>
-                        set({
-                          turns: block.turns.map((x, j) => (j === i ? { ...x, radius: v } : x)),
-                        })
-                      }
+                      onChange={(v) => setTurn(block, i, { radius: v })}
                     />
                     <label className="flex h-11 items-center gap-2 text-sm">
                       <input
                         type="checkbox"
                         checked={t.reverse}
-                        onChange={(e) =>
-                          set({
-                            turns: block.turns.map((x, j) =>
-                              j === i ? { ...x, reverse: e.target.checked } : x,
-                            ),
-                          })
-                        }
+                        onChange={(e) => setTurn(block, i, { reverse: e.target.checked })}
                       />
                       Reversing
                     </label>
@@ -215,13 +203,7 @@ function BlockEditor({
                       <input
                         type="checkbox"
                         checked={t.laden}
-                        onChange={(e) =>
-                          set({
-                            turns: block.turns.map((x, j) =>
-                              j === i ? { ...x, laden: e.target.checked } : x,
-                            ),
-                          })
-                        }
+                        onChange={(e) => setTurn(block, i, { laden: e.target.checked })}
                       />
                       Laden
                     </label>
