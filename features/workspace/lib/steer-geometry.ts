@@ -8,6 +8,7 @@
  * wheels do not share one.
  */
 import {
+  angleErrorCurve,
   articulatedRadii,
   idealSteerAngles,
   linkageOuterAngle,
@@ -92,19 +93,6 @@ export function idealOuter(wheelbase: number, pivotTrack: number, inner: number)
   if (inner <= 0) return 0;
   const radius = wheelbase / tanD(inner) + pivotTrack / 2;
   return idealSteerAngles({ wheelbase, pivotTrack, radius }).outer;
-}
-
-/**
- * Percent Ackermann by the toe-out-difference definition:
- * 100·(δi − δo,actual)/(δi − δo,ideal) at the given inner angle (100 % = ideal, 0 % = parallel).
- */
-export function percentAckermann(
-  actualOuter: number,
-  idealOuterAngle: number,
-  inner: number,
-): number {
-  const idealGap = inner - idealOuterAngle;
-  return idealGap === 0 ? 100 : (100 * (inner - actualOuter)) / idealGap;
 }
 
 const pivotTrackOf = (axle: TMachine["axles"]["front"]) => axle.pivotTrack ?? axle.track;
@@ -340,41 +328,31 @@ export function planView(machine: TMachine, input: number): TPlanView {
 export type TLockPoint = { inner: number; outer: number | null; ideal: number };
 export type TLockCurve = {
   points: TLockPoint[];
-  /** At full lock, toe-out-difference definition; null when the linkage cannot reach full lock. */
+  /** At full lock, the engine's toe-out-difference definition; null when the linkage cannot reach full lock. */
   percentAckermannAtFullLock: number | null;
   fullLock: number;
 };
 
+const PAIRED_LAYOUTS = new Set(["ideal", "trapezoid", "parallel", "rear", "four-wheel"]);
+
 /**
- * Outer against inner road-wheel angle across the lock range, with the Ackermann ideal, for layouts
- * that have an inner/outer wheel pair on one steered axle; null for the others.
+ * Outer against inner road-wheel angle across the lock range with the Ackermann ideal, from the
+ * engine's angle-error curve, for layouts with an inner/outer wheel pair on a steered axle; null
+ * for the others (turntable and articulated share one spin axis, crab and skid do not turn so).
  */
 export function lockCurve(machine: TMachine, steps = 40): TLockCurve | null {
   const s = machine.steering;
-  if (!("maxLock" in s) || s.layout === "turntable" || s.layout === "crab") return null;
-  const axle = s.layout === "rear" ? machine.axles.rear : machine.axles.front;
-  const pivotTrack = pivotTrackOf(axle);
-  // Four-wheel steer: the front axle works over the distance to the single-track centre line.
-  const k = s.layout === "four-wheel" ? (s.rearRatio ?? 1) : 0;
-  const L =
-    s.layout === "four-wheel"
-      ? machine.wheelbase / 2 - (machine.wheelbase / 2) * ((k - 1) / (k + 1))
-      : machine.wheelbase;
-  const points: TLockPoint[] = [];
-  for (let i = 0; i <= steps; i++) {
-    const inner = (s.maxLock * i) / steps;
-    const outer = outerAngle(s, L, pivotTrack, inner);
-    points.push({
-      inner,
-      outer: Number.isNaN(outer) ? null : outer,
-      ideal: idealOuter(L, pivotTrack, inner),
-    });
-  }
-  const last = points[points.length - 1]!;
+  if (!PAIRED_LAYOUTS.has(s.layout) || !("maxLock" in s)) return null;
+  const curve = angleErrorCurve({ machine, steps });
+  const points: TLockPoint[] = [
+    { inner: 0, outer: 0, ideal: 0 },
+    ...curve.map((p) => ({ inner: p.inner, outer: p.outer, ideal: p.idealOuter })),
+  ];
+  const last = curve[curve.length - 1];
+  const reachesFullLock = !!last && Math.abs(last.inner - s.maxLock) < 1e-9;
   return {
     points,
-    percentAckermannAtFullLock:
-      last.outer === null ? null : percentAckermann(last.outer, last.ideal, last.inner),
+    percentAckermannAtFullLock: reachesFullLock ? last.percentAckermann : null,
     fullLock: s.maxLock,
   };
 }

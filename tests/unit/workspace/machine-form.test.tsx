@@ -96,5 +96,6 @@ describe("machine form", () => {
     fireEvent.change(sizes[1]!, { target: { value: "460/85R34" } });
     await waitFor(() => expect(screen.getByTestId("geometry-view")).toBeTruthy());
     expect(screen.getByTestId("percent-ackermann").textContent).toMatch(/%$/);
+    expect(screen.getByTestId("full-lock-diameter").textContent).toMatch(/^\d+(\.\d)? m$/);
   });
 });

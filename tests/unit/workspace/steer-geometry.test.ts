@@ -1,12 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { ZMachine, type TMachine, type TMachineInput } from "@/lib/scrub";
+import { minimumTurningDiameter, ZMachine, type TMachine, type TMachineInput } from "@/lib/scrub";
 import { DEMO_MACHINES } from "@/lib/demo/machines";
-import {
-  idealOuter,
-  lockCurve,
-  percentAckermann,
-  planView,
-} from "@/features/workspace/lib/steer-geometry";
+import { idealOuter, lockCurve, planView } from "@/features/workspace/lib/steer-geometry";
 
 const RAD = Math.PI / 180;
 const demo = (id: string) => DEMO_MACHINES.find((m) => m.id === id)!.machine;
@@ -46,6 +41,13 @@ describe("plan-view geometry", () => {
     const rs = (m.axles.front.track - Tk) / 2;
     const outer = idealOuter(L, Tk, 52);
     expect(v.turningDiameter).toBeCloseTo(2 * (L / Math.sin(outer * RAD) + rs), 9);
+  });
+
+  it("for ideal geometry the plan view's full-lock diameter matches the engine's solved one", () => {
+    const m = withSteering(demo("row-crop-tractor"), { layout: "ideal", maxLock: 50 });
+    const engine = minimumTurningDiameter({ machine: m });
+    expect(engine).not.toBeNull();
+    expect(planView(m, 50).turningDiameter!).toBeCloseTo(engine!, 2);
   });
 
   it("parallel steer: the two front wheels give two different centres", () => {
@@ -117,7 +119,6 @@ describe("lock-range curve and percent Ackermann (toe-out-difference definition,
       lockCurve(withSteering(demo("row-crop-tractor"), { layout: "parallel", maxLock: 50 }))!
         .percentAckermannAtFullLock,
     ).toBeCloseTo(0, 9);
-    expect(percentAckermann(30, 25, 40)).toBeCloseTo((100 * 10) / 15, 9);
   });
 
   it("a trapezoid linkage sits between parallel and ideal over the lock range", () => {

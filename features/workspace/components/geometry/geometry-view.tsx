@@ -1,7 +1,7 @@
 "use client";
 
 import { useId, useMemo, useState } from "react";
-import { tyreDimensions, type TMachine } from "@/lib/scrub";
+import { minimumTurningDiameter, tyreDimensions, type TMachine } from "@/lib/scrub";
 import { lockCurve, planView, steerInputRange } from "@/features/workspace/lib/steer-geometry";
 import {
   formatQuantity,
@@ -35,7 +35,14 @@ export function GeometryView({ machine, system }: { machine: TMachine; system: T
   const input = range.max * fraction;
   const sliderId = useId();
   const view = useMemo(() => planView(machine, input), [machine, input]);
-  const full = useMemo(() => planView(machine, range.max), [machine, range.max]);
+  // At full lock the engine solves the real turn (tyre forces decide the centre where wheels disagree).
+  const fullDiameter = useMemo(() => {
+    try {
+      return minimumTurningDiameter({ machine });
+    } catch {
+      return planView(machine, range.max).turningDiameter;
+    }
+  }, [machine, range.max]);
   const curve = useMemo(() => lockCurve(machine), [machine]);
   const sizes = useMemo(
     () => ({ front: footprint(machine.axles.front), rear: footprint(machine.axles.rear) }),
@@ -88,11 +95,9 @@ export function GeometryView({ machine, system }: { machine: TMachine; system: T
           </dd>
         </div>
         <div className="rounded-md bg-ink-50 p-2">
-          <dt className="text-ink-600">Turning diameter at full lock</dt>
-          <dd className="text-lg font-medium">
-            {full.turningDiameter === null
-              ? "—"
-              : formatQuantity(system, "distance-m", full.turningDiameter, 1)}
+          <dt className="text-ink-600">Turning diameter at full lock (ISO 7457)</dt>
+          <dd className="text-lg font-medium" data-testid="full-lock-diameter">
+            {fullDiameter === null ? "—" : formatQuantity(system, "distance-m", fullDiameter, 1)}
           </dd>
         </div>
         {curve ? (
