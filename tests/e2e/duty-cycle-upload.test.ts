@@ -114,6 +114,12 @@ describe("duty-cycle upload journey", () => {
     await page.getByRole("heading", { name }).waitFor();
     await page.getByText("Built without a file").first().waitFor();
     await page.getByText("Turns (4)").waitFor();
+    // On a phone the page scrolls down, not sideways (tables and charts scroll inside their box).
+    await page.setViewportSize({ width: 375, height: 740 });
+    const overflow = await page.evaluate(
+      () => document.documentElement.scrollWidth - window.innerWidth,
+    );
+    expect(overflow).toBeLessThanOrEqual(0);
     expect(errors).toEqual([]);
     await page.close();
   });
