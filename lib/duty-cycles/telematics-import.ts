@@ -136,11 +136,11 @@ export function createTelematicsImporter(
   const reusable: TTurnSample = {
     t: 0,
     speed: 0,
-    yawRate: undefined,
-    heading: undefined,
-    steer: undefined,
-    lat: undefined,
-    lon: undefined,
+    yawRate: NaN,
+    heading: NaN,
+    steer: NaN,
+    lat: NaN,
+    lon: NaN,
     reverse: undefined,
     surface: undefined,
     laden: undefined,
@@ -184,7 +184,9 @@ export function createTelematicsImporter(
     const sample = reusable;
     sample.t = t;
     sample.speed = v;
-    sample.yawRate = sample.heading = sample.steer = sample.lat = sample.lon = undefined;
+    // NaN, not undefined, marks an absent value: the fields stay plain doubles (no boxing per
+    // row), and the segmenter reads NaN as absent.
+    sample.yawRate = sample.heading = sample.steer = sample.lat = sample.lon = NaN;
     sample.reverse = undefined;
     const yawRate = optionalNumber(fields, yaw);
     if (yawRate !== undefined) {

@@ -9,7 +9,10 @@
  * angle is positive to the left. A negative speed means the machine is reversing.
  */
 
-/** One telematics sample: s, m/s (negative when reversing), deg/s, deg, deg, decimal degrees. */
+/**
+ * One telematics sample: s, m/s (negative when reversing), deg/s, deg, deg, decimal degrees.
+ * An optional value that is undefined or not finite (NaN) counts as absent.
+ */
 export type TTurnSample = {
   t: number;
   speed: number;
