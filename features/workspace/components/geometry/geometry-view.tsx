@@ -1,7 +1,13 @@
 "use client";
 
 import { useId, useMemo, useState } from "react";
-import { minimumTurningDiameter, tyreDimensions, type TMachine } from "@/lib/scrub";
+import {
+  minimumTurningDiameter,
+  tyreDimensions,
+  type TMachine,
+  type TSteeringLayout,
+} from "@/lib/scrub";
+import { LAYOUT_LABELS } from "@/features/workspace/lib/steering-layouts";
 import { lockCurve, planView, steerInputRange } from "@/features/workspace/lib/steer-geometry";
 import {
   formatQuantity,
@@ -27,9 +33,49 @@ function footprint(axle: TMachine["axles"]["front"]) {
 
 /**
  * Live geometry of a machine: plan view at a chosen steer input, the outer-versus-inner angle
- * curve against the Ackermann ideal across the lock range, percent Ackermann and turning diameter.
+ * curve against the Ackermann ideal across the lock range, percent Ackermann and turning diameter;
+ * a machine with several steering modes (four-wheel and crab...) shows one at a time.
  */
 export function GeometryView({ machine, system }: { machine: TMachine; system: TUnitSystem }) {
+  const modes = [machine.steering, ...machine.otherSteeringModes];
+  const [layout, setLayout] = useState(machine.steering.layout);
+  const selectId = useId();
+  const chosen = modes.find((m) => m.layout === layout) ?? machine.steering;
+  const modeMachine = useMemo(
+    () => ({ ...machine, steering: chosen, otherSteeringModes: [] }),
+    [machine, chosen],
+  );
+  return (
+    <section
+      aria-label="Steering geometry"
+      className="flex flex-col gap-4"
+      data-testid="geometry-view"
+    >
+      {modes.length > 1 ? (
+        <div className="flex flex-col gap-1">
+          <label htmlFor={selectId} className="text-sm font-medium text-ink-800">
+            Steering mode shown
+          </label>
+          <select
+            id={selectId}
+            value={chosen.layout}
+            onChange={(e) => setLayout(e.target.value as TSteeringLayout)}
+            className="h-11 max-w-[420px] rounded-md border border-ink-300 bg-white px-3"
+          >
+            {modes.map((m) => (
+              <option key={m.layout} value={m.layout}>
+                {LAYOUT_LABELS[m.layout]}
+              </option>
+            ))}
+          </select>
+        </div>
+      ) : null}
+      <ModeGeometry key={chosen.layout} machine={modeMachine} system={system} />
+    </section>
+  );
+}
+
+function ModeGeometry({ machine, system }: { machine: TMachine; system: TUnitSystem }) {
   const range = steerInputRange(machine.steering);
   const [fraction, setFraction] = useState(0.6);
   const input = range.max * fraction;
@@ -65,11 +111,7 @@ export function GeometryView({ machine, system }: { machine: TMachine; system: T
     range.unit === "deg" ? `${input.toFixed(1)}°` : formatQuantity(system, "distance-m", input, 1);
 
   return (
-    <section
-      aria-label="Steering geometry"
-      className="flex flex-col gap-4"
-      data-testid="geometry-view"
-    >
+    <div className="flex flex-col gap-4">
       <div className="flex flex-col gap-1">
         <label htmlFor={sliderId} className="text-sm font-medium text-ink-800">
           {range.label}: <output>{inputText}</output>
@@ -152,6 +194,6 @@ export function GeometryView({ machine, system }: { machine: TMachine; system: T
         turning centre from the tyre forces. Check lock stops and turning circles against the
         machine maker&apos;s figures.
       </p>
-    </section>
+    </div>
   );
 }
