@@ -3,6 +3,7 @@
 // time (upload verb -> pg-boss -> worker process -> PostgreSQL) and the worker's peak RSS.
 // Needs PostgreSQL at DATABASE_URL (default: the dev cluster's "tc_bench" database, created here).
 import { execFileSync, spawn } from "node:child_process";
+import { rm } from "node:fs/promises";
 import { createReadStream, existsSync, readFileSync, statSync } from "node:fs";
 import { Readable } from "node:stream";
 import os from "node:os";
@@ -180,6 +181,8 @@ async function fullIngest() {
   await new Promise((r) => worker.on("exit", r));
   await (await getImportSender()).stop({ graceful: false, wait: true });
   await getPool().end();
+  // The stored copy of the upload is only needed for this run.
+  await rm(process.env.UPLOAD_DIR!, { recursive: true, force: true });
   if (row!.status !== "ready") throw new Error(`import failed: ${row!.failureReason}`);
   const jobMs = Number(/: ready in (\d+) ms/.exec(workerLog)?.[1] ?? NaN);
   const jobDetail = / ms( \(file .*\))/.exec(workerLog)?.[1] ?? "";
