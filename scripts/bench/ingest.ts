@@ -14,7 +14,8 @@ import { BENCH_MAPPING } from "./ingest-mapping";
 const ROWS = Number(process.env.BENCH_ROWS ?? 1_000_000);
 const FILE = `var/bench/ingest-${ROWS}.csv`;
 process.env.DATABASE_URL ??= "postgres://postgres@127.0.0.1:54329/tc_bench";
-process.env.UPLOAD_DIR ??= "var/bench/uploads";
+// Always a folder of its own: the run deletes it afterwards.
+process.env.UPLOAD_DIR = "var/bench/uploads";
 process.env.UPLOAD_LIMIT_BYTES ??= String(200 * 1024 * 1024);
 
 const ms = (t0: bigint) => Number(process.hrtime.bigint() - t0) / 1e6;
