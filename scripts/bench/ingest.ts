@@ -1,7 +1,7 @@
 // npm run bench:ingest: ingest speed and memory on a seeded one-million-row telematics log.
 // Prints papaparse's bare parse time, our parse + segment time, the full upload-to-stored-turns
 // time (upload verb -> pg-boss -> worker process -> PostgreSQL) and the worker's peak RSS.
-// Needs PostgreSQL at DATABASE_URL (default: the dev cluster's "tc_bench" database, created here).
+// Needs the dev PostgreSQL cluster; it recreates its own "treadcast_bench_ingest" database there.
 import { execFileSync, spawn } from "node:child_process";
 import { rm } from "node:fs/promises";
 import { createReadStream, existsSync, readFileSync, statSync } from "node:fs";
@@ -13,7 +13,12 @@ import { BENCH_MAPPING } from "./ingest-mapping";
 
 const ROWS = Number(process.env.BENCH_ROWS ?? 1_000_000);
 const FILE = `var/bench/ingest-${ROWS}.csv`;
-process.env.DATABASE_URL ??= "postgres://postgres@127.0.0.1:54329/tc_bench";
+// A database of its own, dropped and recreated by each run: never the one DATABASE_URL names.
+const benchDb = new URL(
+  process.env.DATABASE_URL ?? "postgres://postgres@127.0.0.1:54329/treadcast",
+);
+benchDb.pathname = "/treadcast_bench_ingest";
+process.env.DATABASE_URL = benchDb.toString();
 // Always a folder of its own: the run deletes it afterwards.
 process.env.UPLOAD_DIR = "var/bench/uploads";
 process.env.UPLOAD_LIMIT_BYTES ??= String(200 * 1024 * 1024);
