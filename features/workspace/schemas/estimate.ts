@@ -36,3 +36,21 @@ export type TEstimateDto = TEstimateRow & {
   engineVersion: string;
   result: TEstimateResult;
 };
+
+/** An estimate's result never changes; only its title may. */
+export const ZEstimatePatch = z.strictObject(
+  {
+    title: z
+      .string({ error: "title must be text." })
+      .trim()
+      .min(1, "Give the estimate a title.")
+      .max(160, "Title must be at most 160 characters."),
+  },
+  {
+    error: (issue) =>
+      issue.code === "unrecognized_keys"
+        ? "Only the title of an estimate can change; run a new estimate for other inputs."
+        : undefined,
+  },
+);
+export type TEstimatePatch = z.input<typeof ZEstimatePatch>;

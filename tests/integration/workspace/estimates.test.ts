@@ -6,7 +6,7 @@ import { POST as createSite } from "@/app/api/v1/sites/route";
 import { POST as createMachine } from "@/app/api/v1/machines/route";
 import { DELETE as deleteMachine } from "@/app/api/v1/machines/[id]/route";
 import { GET as list, POST as create } from "@/app/api/v1/estimates/route";
-import { GET as getOne, DELETE as remove } from "@/app/api/v1/estimates/[id]/route";
+import { GET as getOne, PATCH as patch, DELETE as remove } from "@/app/api/v1/estimates/[id]/route";
 import { GET as csv } from "@/app/api/v1/estimates/[id]/csv/route";
 import { createTestMember } from "@/tests/support/session";
 import { call, db, insertReadyDutyCycle, makeDealership, testTractorSpec } from "./support";
@@ -84,6 +84,47 @@ describe("estimates API", () => {
     expect((await call(list, team.admin.cookie, "/api/v1/estimates?pageSize=1")).body.total).toBe(
       before,
     );
+  });
+
+  it("renames an estimate but refuses any other change, keeping the stored result", async () => {
+    const e = await call(create, team.admin.cookie, "/api/v1/estimates", {
+      method: "POST",
+      body: { machineId, dutyCycleId },
+    });
+    const id = e.body.id;
+    const renamed = await call(patch, team.estimator.cookie, "x", {
+      method: "PATCH",
+      params: { id },
+      body: { title: "Spring quote" },
+    });
+    expect(renamed.status).toBe(200);
+    expect(renamed.body.title).toBe("Spring quote");
+    expect(renamed.body.result).toEqual(e.body.result);
+    const empty = await call(patch, team.admin.cookie, "x", {
+      method: "PATCH",
+      params: { id },
+      body: { title: " " },
+    });
+    expect(empty.status).toBe(400);
+    expect(empty.body.error.fieldErrors.title).toBeDefined();
+    const other = await call(patch, team.admin.cookie, "x", {
+      method: "PATCH",
+      params: { id },
+      body: { title: "X", costPerHour: 0 },
+    });
+    expect(other.status).toBe(400);
+    expect((await call(getOne, team.admin.cookie, "x", { params: { id } })).body.title).toBe(
+      "Spring quote",
+    );
+    expect(
+      (
+        await call(patch, team.billing.cookie, "x", {
+          method: "PATCH",
+          params: { id },
+          body: { title: "No" },
+        })
+      ).status,
+    ).toBe(403);
   });
 
   it("refuses a duty cycle that is not ready, or belongs to another customer", async () => {

@@ -1,11 +1,24 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { confirmed, pathId, respond } from "@/features/workspace/server/respond";
+import { confirmed, pathId, readJson, respond } from "@/features/workspace/server/respond";
 import { getEstimate } from "@/features/workspace/server/get-estimate";
 import { deleteEstimate } from "@/features/workspace/server/delete-estimate";
+import { updateEstimate } from "@/features/workspace/server/update-estimate";
 
 export const GET = withActor(({ actor, params }) =>
   respond(() => getEstimate({ db: getDb(), actor, id: pathId(params.id, "estimate") })),
+);
+
+/** Renames the estimate (the only thing about it that can change). */
+export const PATCH = withActor(({ req, actor, params }) =>
+  respond(async () =>
+    updateEstimate({
+      db: getDb(),
+      actor,
+      id: pathId(params.id, "estimate"),
+      input: await readJson(req),
+    }),
+  ),
 );
 
 export const DELETE = withActor(({ req, actor, params }) =>
