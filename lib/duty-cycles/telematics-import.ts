@@ -53,18 +53,24 @@ const MAX_GAP = 10; // s: a longer pause in the log is not operating time (match
 const MAX_YAW_RATE = 360; // deg/s: faster is a sensor fault, no machine spins that fast
 const MAX_ENGINE_SPEED = 20; // m/s: the engine's limit for a turn
 
-/** Meaning of a text cell, read once per distinct word; consecutive repeats skip the hashing. */
+/** What a text cell reads as when it is empty or only spaces. */
+const BLANK = Symbol("blank");
+
+/**
+ * Meaning of a text cell, read once per distinct word (blank included); consecutive repeats
+ * skip even the hashing.
+ */
 class WordCache<T> {
-  private readonly known = new Map<string, T | null>();
+  private readonly known = new Map<string, T | null | typeof BLANK>();
   private lastCell: string | undefined;
-  private lastValue: T | null = null;
+  private lastValue: T | null | typeof BLANK = null;
   constructor(private readonly parse: (cell: string) => T | undefined) {}
 
-  read(cell: string): T | null {
+  read(cell: string): T | null | typeof BLANK {
     if (cell === this.lastCell) return this.lastValue;
     let value = this.known.get(cell);
     if (value === undefined) {
-      value = this.parse(cell) ?? null;
+      value = cell.trim() === "" ? BLANK : (this.parse(cell) ?? null);
       if (this.known.size < 1000) this.known.set(cell, value);
     }
     this.lastCell = cell;
@@ -118,14 +124,17 @@ export function createTelematicsImporter(
   let firstHours = NaN;
   let lastHours = NaN;
 
-  /** Optional numeric cell: undefined when empty, NaN when not a number. */
-  function optionalNumber(fields: readonly string[], r: Reader | undefined): number | undefined {
-    if (!r) return undefined;
-    const cell = fields[r.ref.index]!;
-    if (cell.length === 0) return undefined;
-    const n = parseDecimal(cell, decimal);
-    if (Number.isNaN(n) && cell.trim() === "") return undefined;
-    return n * r.factor;
+  /**
+   * Numeric cell in SI units; NaN when the column is unmapped, the cell blank or not a number
+   * (hasValue tells those apart, off the hot path). NaN rather than undefined keeps every value
+   * a plain double: no boxed number per cell.
+   */
+  function numberAt(fields: readonly string[], r: Reader | undefined): number {
+    return r ? parseDecimal(fields[r.ref.index]!, decimal) * r.factor : NaN;
+  }
+  /** Whether a cell that read as NaN holds something (so is an error, not an absent value). */
+  function hasValue(fields: readonly string[], r: Reader | undefined): boolean {
+    return r !== undefined && fields[r.ref.index]!.trim() !== "";
   }
 
   // Text cells repeat the same few words millions of times: read each distinct word once.
@@ -188,8 +197,10 @@ export function createTelematicsImporter(
     // row), and the segmenter reads NaN as absent.
     sample.yawRate = sample.heading = sample.steer = sample.lat = sample.lon = NaN;
     sample.reverse = undefined;
-    const yawRate = optionalNumber(fields, yaw);
-    if (yawRate !== undefined) {
+    // Each optional number: finite is a value, NaN in a blank cell is absent, anything else is
+    // an error. The sample keeps NaN for absent values.
+    const yawRate = numberAt(fields, yaw);
+    if (yawRate === yawRate || hasValue(fields, yaw)) {
       if (!Number.isFinite(yawRate) || Math.abs(yawRate) > MAX_YAW_RATE)
         return log.add(
           line,
@@ -201,8 +212,8 @@ export function createTelematicsImporter(
         );
       sample.yawRate = yawRate;
     }
-    const h = optionalNumber(fields, heading);
-    if (h !== undefined) {
+    const h = numberAt(fields, heading);
+    if (h === h || hasValue(fields, heading)) {
       if (!Number.isFinite(h) || h < -360 || h > 720)
         return log.add(
           line,
@@ -212,8 +223,8 @@ export function createTelematicsImporter(
         );
       sample.heading = h;
     }
-    const delta = optionalNumber(fields, steer);
-    if (delta !== undefined) {
+    const delta = numberAt(fields, steer);
+    if (delta === delta || hasValue(fields, steer)) {
       if (!Number.isFinite(delta) || Math.abs(delta) >= 89)
         return log.add(
           line,
@@ -223,17 +234,18 @@ export function createTelematicsImporter(
         );
       sample.steer = delta;
     }
-    const la = optionalNumber(fields, lat);
-    const lo = optionalNumber(fields, lon);
-    if (la !== undefined || lo !== undefined) {
-      if (la === undefined || !Number.isFinite(la) || Math.abs(la) > 90)
+    const la = numberAt(fields, lat);
+    const lo = numberAt(fields, lon);
+    const hasLa = la === la || hasValue(fields, lat);
+    if (hasLa || lo === lo || hasValue(fields, lon)) {
+      if (!hasLa || !Number.isFinite(la) || Math.abs(la) > 90)
         return log.add(
           line,
           lat!.name,
           "is not a latitude in decimal degrees",
           fields[lat!.ref.index]!,
         );
-      if (lo === undefined || !Number.isFinite(lo) || Math.abs(lo) > 180)
+      if (!Number.isFinite(lo) || Math.abs(lo) > 180)
         return log.add(
           line,
           lon!.name,
@@ -246,43 +258,37 @@ export function createTelematicsImporter(
     let surf = defaults.surface;
     if (surface) {
       const cell = fields[surface.ref.index]!;
-      if (cell.length > 0 && cell.trim() !== "") {
-        const s = surfaceWords.read(cell);
-        if (!s)
-          return log.add(
-            line,
-            surface.name,
-            "is not a surface we know (concrete, gravel, firm soil, loose soil, grass)",
-            cell,
-          );
-        surf = s;
-      }
+      const s = surfaceWords.read(cell);
+      if (s === null)
+        return log.add(
+          line,
+          surface.name,
+          "is not a surface we know (concrete, gravel, firm soil, loose soil, grass)",
+          cell,
+        );
+      if (s !== BLANK) surf = s;
     }
     let laden = defaults.loadState === "laden";
     if (load) {
       const cell = fields[load.ref.index]!;
-      if (cell.trim() !== "") {
-        const l = loadWords.read(cell);
-        if (!l) return log.add(line, load.name, "is not a load state (laden or empty)", cell);
-        laden = l === "laden";
-      }
+      const l = loadWords.read(cell);
+      if (l === null) return log.add(line, load.name, "is not a load state (laden or empty)", cell);
+      if (l !== BLANK) laden = l === "laden";
     }
     if (direction) {
       const cell = fields[direction.ref.index]!;
-      if (cell.trim() !== "") {
-        const r = reverseWords.read(cell);
-        if (r === null)
-          return log.add(
-            line,
-            direction.name,
-            "is not a travel direction (forward or reverse)",
-            cell,
-          );
-        sample.reverse = r;
-      }
+      const r = reverseWords.read(cell);
+      if (r === null)
+        return log.add(
+          line,
+          direction.name,
+          "is not a travel direction (forward or reverse)",
+          cell,
+        );
+      if (r !== BLANK) sample.reverse = r;
     }
-    const hm = optionalNumber(fields, hourMeter);
-    if (hm !== undefined) {
+    const hm = numberAt(fields, hourMeter);
+    if (hm === hm || hasValue(fields, hourMeter)) {
       if (!Number.isFinite(hm) || hm < lastHours)
         return log.add(
           line,

@@ -10,11 +10,12 @@ const POW10 = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12,
  * Plain decimals ("-12.345") read digit by digit. Exact: with at most 15 significant digits the
  * integer mantissa and the power of ten are both exact doubles, so one division is correctly
  * rounded (Clinger, "How to read floating point numbers accurately", PLDI 1990, fast path).
- * Anything else (exponents, spaces, more digits) returns undefined for the general path.
+ * Anything else (exponents, spaces, more digits) returns NaN for the general path: a NaN, not
+ * undefined, keeps the result a plain double (no boxed number per cell on this hot path).
  */
-function readPlainDecimal(text: string, mark: number): number | undefined {
+function readPlainDecimal(text: string, mark: number): number {
   const n = text.length;
-  if (n === 0 || n > 17) return undefined;
+  if (n === 0 || n > 17) return NaN;
   let i = 0;
   let negative = false;
   const first = text.charCodeAt(0);
@@ -32,9 +33,9 @@ function readPlainDecimal(text: string, mark: number): number | undefined {
       digits++;
       if (scale >= 0) scale++;
     } else if (c === mark && scale < 0) scale = 0;
-    else return undefined;
+    else return NaN;
   }
-  if (digits === 0 || digits > 15) return undefined;
+  if (digits === 0 || digits > 15) return NaN;
   const value = scale > 0 ? mantissa / POW10[scale]! : mantissa;
   return negative ? -value : value;
 }
@@ -42,7 +43,8 @@ function readPlainDecimal(text: string, mark: number): number | undefined {
 /** Parses a decimal number written with "." or "," as the decimal mark; NaN when it is not one. */
 export function parseDecimal(text: string, decimal: "." | ","): number {
   const fast = readPlainDecimal(text, decimal === "," ? 44 : 46);
-  if (fast !== undefined) return fast;
+  if (fast === fast) return fast; // not NaN
+
   // Hot path (millions of cells): Number() already ignores surrounding spaces; only a blank
   // cell, which Number() reads as 0, needs a second look.
   const n = Number(decimal === "," && text.includes(",") ? text.replace(",", ".") : text);
