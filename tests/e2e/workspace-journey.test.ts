@@ -182,4 +182,32 @@ describe("workspace journey", () => {
     await page.waitForURL(`${baseUrl}/machines`);
     await context.close();
   });
+
+  it("workspace pages fit a phone screen without sideways scrolling", async () => {
+    const context = await browser.newContext({ viewport: { width: 375, height: 740 } });
+    const page = await context.newPage();
+    await signIn(page, "estimator@brackenridge.test");
+    const estimate = (await (
+      await page.request.get(`${baseUrl}/api/v1/estimates?pageSize=1`)
+    ).json()) as {
+      items: { id: string; machineId: string }[];
+    };
+    const first = estimate.items[0]!;
+    for (const path of [
+      "/dashboard",
+      "/customers",
+      "/machines",
+      "/estimates",
+      `/estimates/${first.id}`,
+      `/machines/${first.machineId}`,
+    ]) {
+      await page.goto(`${baseUrl}${path}`);
+      await page.waitForLoadState("networkidle");
+      const overflow = await page.evaluate(
+        () => document.documentElement.scrollWidth - window.innerWidth,
+      );
+      expect(overflow, path).toBeLessThanOrEqual(0);
+    }
+    await context.close();
+  });
 });
