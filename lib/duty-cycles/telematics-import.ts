@@ -104,25 +104,37 @@ export function createTelematicsImporter(
   const direction = read("direction");
   const hourMeter = read("hourMeter");
   const timeIsIso = time.ref.unit === "iso8601";
+  // Read on every row: plain locals rather than property chains.
+  const timeIndex = time.ref.index;
+  const timeFactor = time.factor;
+  const speedIndex = speed.ref.index;
+  const speedFactor = speed.factor;
+  const maxSpeed = defaults.maxSpeed;
   const widest = Math.max(...Object.values(mapping.columns).map((c) => c.index)) + 1;
 
   const segmenter = createTurnSegmenter({ wheelbase: defaults.wheelbase, ...options.segment });
   const detected: TDetectedTurn[] = [];
-  let used = 0;
-  let prevT = NaN;
-  let logStart = 0;
-  let prevSpeed = 0;
-  let prevSurface: TSurfaceKind = defaults.surface;
-  let prevLaden = defaults.loadState === "laden";
-  let seconds = 0;
-  let distance = 0;
-  let ladenDistance = 0;
+  // Running state lives in an object, not in `let`s the row function closes over: V8 boxes a
+  // number kept in a closure's context, so every row would allocate a fresh one per variable.
+  const run = {
+    used: 0,
+    prevT: NaN,
+    logStart: NaN,
+    prevSpeed: NaN,
+    prevSurface: defaults.surface,
+    prevLaden: defaults.loadState === "laden",
+    seconds: NaN,
+    distance: NaN,
+    ladenDistance: NaN,
+    prevSurfaceIndex: ZSurfaceKind.options.indexOf(defaults.surface),
+    firstHours: NaN,
+    lastHours: NaN,
+  };
+  // Doubles from the start (NaN above), so the fields never change representation.
+  run.logStart = run.prevSpeed = run.seconds = run.distance = run.ladenDistance = 0;
   // Distance per surface, indexed like ZSurfaceKind.options; the index changes only with the surface.
   const surfaceDistance = new Float64Array(ZSurfaceKind.options.length);
-  let prevSurfaceIndex = ZSurfaceKind.options.indexOf(defaults.surface);
-  const histogram = new Array<number>(SPEED_BINS).fill(0);
-  let firstHours = NaN;
-  let lastHours = NaN;
+  const histogram = new Float64Array(SPEED_BINS);
 
   /**
    * Numeric cell in SI units; NaN when the column is unmapped, the cell blank or not a number
@@ -165,24 +177,24 @@ export function createTelematicsImporter(
       );
       return;
     }
-    const tCell = fields[time!.ref.index]!;
+    const tCell = fields[timeIndex]!;
     const t = timeIsIso
       ? parseTime(tCell, "iso8601", decimal)
-      : parseDecimal(tCell, decimal) * time!.factor;
+      : parseDecimal(tCell, decimal) * timeFactor;
     if (!Number.isFinite(t))
       return log.add(line, time!.name, "is not a time in the chosen unit", tCell);
-    if (t < prevT)
+    if (t < run.prevT)
       return log.add(
         line,
         time!.name,
-        `goes back in time (${(prevT - t).toFixed(3)} s before the row above)`,
+        `goes back in time (${(run.prevT - t).toFixed(3)} s before the row above)`,
         tCell,
       );
-    if (t === prevT) return log.add(line, time!.name, "repeats the time of the row above", tCell);
-    const vCell = fields[speed!.ref.index]!;
-    const v = parseDecimal(vCell, decimal) * speed!.factor;
+    if (t === run.prevT) return log.add(line, time!.name, "repeats the time of the row above", tCell);
+    const vCell = fields[speedIndex]!;
+    const v = parseDecimal(vCell, decimal) * speedFactor;
     if (!Number.isFinite(v)) return log.add(line, speed!.name, "is not a number", vCell);
-    if (Math.abs(v) > defaults.maxSpeed)
+    if (Math.abs(v) > maxSpeed)
       return log.add(
         line,
         speed!.name,
@@ -289,47 +301,47 @@ export function createTelematicsImporter(
     }
     const hm = numberAt(fields, hourMeter);
     if (hm === hm || hasValue(fields, hourMeter)) {
-      if (!Number.isFinite(hm) || hm < lastHours)
+      if (!Number.isFinite(hm) || hm < run.lastHours)
         return log.add(
           line,
           hourMeter!.name,
           Number.isFinite(hm) ? "runs backwards" : "is not a number",
           fields[hourMeter!.ref.index]!,
         );
-      if (Number.isNaN(firstHours)) firstHours = hm;
-      lastHours = hm;
+      if (Number.isNaN(run.firstHours)) run.firstHours = hm;
+      run.lastHours = hm;
     }
     sample.surface = surf;
     sample.laden = laden;
 
-    const dt = t - prevT;
+    const dt = t - run.prevT;
     if (dt > 0 && dt <= MAX_GAP) {
-      const ds = ((Math.abs(prevSpeed) + Math.abs(v)) / 2) * dt;
-      seconds += dt;
-      distance += ds;
-      if (prevLaden) ladenDistance += ds;
-      surfaceDistance[prevSurfaceIndex]! += ds;
-      const bin = Math.min(SPEED_BINS - 1, Math.floor(Math.abs(prevSpeed) / SPEED_BIN_WIDTH));
+      const ds = ((Math.abs(run.prevSpeed) + Math.abs(v)) / 2) * dt;
+      run.seconds += dt;
+      run.distance += ds;
+      if (run.prevLaden) run.ladenDistance += ds;
+      surfaceDistance[run.prevSurfaceIndex]! += ds;
+      const bin = Math.min(SPEED_BINS - 1, Math.floor(Math.abs(run.prevSpeed) / SPEED_BIN_WIDTH));
       histogram[bin]! += dt;
     }
-    if (used === 0) logStart = t;
-    prevT = t;
-    prevSpeed = v;
-    if (surf !== prevSurface) {
-      prevSurface = surf;
-      prevSurfaceIndex = ZSurfaceKind.options.indexOf(surf);
+    if (run.used === 0) run.logStart = t;
+    run.prevT = t;
+    run.prevSpeed = v;
+    if (surf !== run.prevSurface) {
+      run.prevSurface = surf;
+      run.prevSurfaceIndex = ZSurfaceKind.options.indexOf(surf);
     }
-    prevLaden = laden;
-    used++;
+    run.prevLaden = laden;
+    run.used++;
     const done = segmenter.push(sample);
     if (done.length > 0) detected.push(...done);
   }
 
   function finish(): TImportResult {
     detected.push(...segmenter.finish());
-    if (used < 2 || log.count > used) throw tooFewRowsFailure(used, log.count, log);
-    const meterHours = lastHours - firstHours;
-    const hours = Number.isFinite(meterHours) && meterHours > 0 ? meterHours : seconds / 3600;
+    if (run.used < 2 || log.count > run.used) throw tooFewRowsFailure(run.used, log.count, log);
+    const meterHours = run.lastHours - run.firstHours;
+    const hours = Number.isFinite(meterHours) && meterHours > 0 ? meterHours : run.seconds / 3600;
     if (!(hours * 3600 >= 60))
       throw new ImportFailure(
         "The log covers less than a minute of work: upload a longer log so turns per hour mean something.",
@@ -353,17 +365,17 @@ export function createTelematicsImporter(
         reverse: d.reverse,
         distance: d.distance,
         duration: d.end - d.start,
-        startTime: d.start - logStart,
+        startTime: d.start - run.logStart,
       };
     });
-    const straightDistance = Math.max(0, distance - turnDistance);
+    const straightDistance = Math.max(0, run.distance - turnDistance);
     const turningSeconds = detected.reduce((s, d) => s + (d.end - d.start), 0);
     const movingSeconds = histogram.reduce((s, x, i) => (i === 0 ? s : s + x), 0);
     const straightSeconds = Math.max(1, movingSeconds - turningSeconds);
     const shares: Partial<Record<TSurfaceKind, number>> = {};
     ZSurfaceKind.options.forEach((k, i) => {
       const d = surfaceDistance[i]!;
-      if (d > 0) shares[k] = d / Math.max(distance, 1e-9);
+      if (d > 0) shares[k] = d / Math.max(run.distance, 1e-9);
     });
     if (Object.keys(shares).length === 0) shares[defaults.surface] = 1;
     return {
@@ -372,14 +384,14 @@ export function createTelematicsImporter(
         distancePerHour: straightDistance / hours,
         speed: Math.min(MAX_ENGINE_SPEED, straightDistance / straightSeconds),
         surfaceShares: shares,
-        ladenShare: distance > 0 ? ladenDistance / distance : 0,
+        ladenShare: run.distance > 0 ? run.ladenDistance / run.distance : 0,
       },
       operatingHours: hours,
-      rowsUsed: used,
+      rowsUsed: run.used,
       rowsSkipped: log.count,
       errors: log.errors,
       errorCount: log.count,
-      speedHistogram: { binWidth: SPEED_BIN_WIDTH, seconds: histogram },
+      speedHistogram: { binWidth: SPEED_BIN_WIDTH, seconds: Array.from(histogram) },
     };
   }
 

@@ -108,35 +108,37 @@ type Step = {
 
 /** Turns raw samples into heading and distance increments, one source picked per sample. */
 class HeadingTracker {
-  // The previous sample, as plain fields: samples may be reused by the caller.
+  // The previous sample, as plain fields: samples may be reused by the caller. NaN marks an
+  // absent number: a field that mixed numbers with undefined would box a new number per write.
   private hasPrev = false;
-  private prevT = 0;
-  private prevSpeed = 0;
-  private prevRate: number | undefined;
-  private prevPsi: number | undefined;
+  private prevT = NaN;
+  private prevSpeed = NaN;
+  private prevRate = NaN;
+  private prevPsi = NaN;
   private anchor: { x: number; y: number; reverse: boolean } | undefined;
-  private gpsPsi: number | undefined;
-  private lat0: number | undefined;
-  private lon0 = 0;
-  private cosLat0 = 1;
+  private gpsPsi = NaN;
+  private lat0 = NaN;
+  private lon0 = NaN;
+  private cosLat0 = NaN;
 
   constructor(
     private readonly o: Required<Omit<TSegmentOptions, "wheelbase">> & { wheelbase?: number },
   ) {}
 
-  /** Yaw rate of a sample from the rate sources (deg/s), or undefined. */
-  private rateOf(s: TTurnSample, speed: number): number | undefined {
+  /** Yaw rate of a sample from the rate sources (deg/s), or NaN. */
+  private rateOf(s: TTurnSample, speed: number): number {
     if (s.yawRate !== undefined && Number.isFinite(s.yawRate)) return s.yawRate;
     if (s.steer !== undefined && Number.isFinite(s.steer) && this.o.wheelbase) {
       return (speed * Math.tan(s.steer * DEG)) / this.o.wheelbase / DEG;
     }
-    return undefined;
+    return NaN;
   }
 
-  private gpsHeading(s: TTurnSample, speed: number, reverse: boolean): number | undefined {
-    if (s.lat === undefined || s.lon === undefined) return undefined;
-    if (!Number.isFinite(s.lat) || !Number.isFinite(s.lon)) return undefined;
-    if (this.lat0 === undefined) {
+  /** Unwrapped GPS course (deg, left positive), or NaN before there is one. */
+  private gpsHeading(s: TTurnSample, speed: number, reverse: boolean): number {
+    if (s.lat === undefined || s.lon === undefined) return NaN;
+    if (!Number.isFinite(s.lat) || !Number.isFinite(s.lon)) return NaN;
+    if (Number.isNaN(this.lat0)) {
       this.lat0 = s.lat;
       this.lon0 = s.lon;
       this.cosLat0 = Math.cos(s.lat * DEG);
@@ -155,7 +157,7 @@ class HeadingTracker {
     if (Math.abs(speed) >= this.o.gpsMinSpeed && dx * dx + dy * dy >= this.o.gpsBaseline ** 2) {
       // Course of travel, counter-clockwise from east; the machine points the other way in reverse.
       let psi = Math.atan2(dy, dx) / DEG + (reverse ? 180 : 0);
-      if (this.gpsPsi !== undefined) psi = this.gpsPsi + wrapDegrees(psi - this.gpsPsi);
+      if (!Number.isNaN(this.gpsPsi)) psi = this.gpsPsi + wrapDegrees(psi - this.gpsPsi);
       this.gpsPsi = psi;
       this.anchor = { x, y, reverse };
     }
@@ -164,10 +166,10 @@ class HeadingTracker {
 
   reset() {
     this.hasPrev = false;
-    this.prevRate = undefined;
-    this.prevPsi = undefined;
+    this.prevRate = NaN;
+    this.prevPsi = NaN;
     this.anchor = undefined;
-    this.gpsPsi = undefined;
+    this.gpsPsi = NaN;
   }
 
   /** The result of the latest step, reused: the segmenter copies what it keeps. */
@@ -192,20 +194,21 @@ class HeadingTracker {
       restart = true;
     }
     const rate = this.rateOf(s, speed);
+    const hasRate = !Number.isNaN(rate);
     // Absolute heading (compass, then GPS), left positive and unwrapped; only needed when
-    // the sample has no rate source.
-    let psi: number | undefined;
-    if (rate === undefined) {
+    // the sample has no rate source. NaN when there is none.
+    let psi = NaN;
+    if (!hasRate) {
       if (s.heading !== undefined && Number.isFinite(s.heading)) {
         const h = -s.heading;
-        psi = this.prevPsi === undefined ? h : this.prevPsi + wrapDegrees(h - this.prevPsi);
+        psi = Number.isNaN(this.prevPsi) ? h : this.prevPsi + wrapDegrees(h - this.prevPsi);
       } else psi = this.gpsHeading(s, speed, reverse);
     } else this.anchor = undefined;
     const dt = restart ? 0 : s.t - this.prevT;
     let dPsi = 0;
     if (!restart) {
-      if (rate !== undefined) dPsi = ((this.prevRate ?? rate) + rate) * 0.5 * dt;
-      else if (psi !== undefined && this.prevPsi !== undefined) dPsi = psi - this.prevPsi;
+      if (hasRate) dPsi = ((Number.isNaN(this.prevRate) ? rate : this.prevRate) + rate) * 0.5 * dt;
+      else if (!Number.isNaN(psi) && !Number.isNaN(this.prevPsi)) dPsi = psi - this.prevPsi;
     }
     const ds = restart ? 0 : (Math.abs(this.prevSpeed) + Math.abs(speed)) * 0.5 * dt;
     this.hasPrev = true;
@@ -283,11 +286,11 @@ type OpenTurn = {
 
 /** The value |rate| exceeds for the top tenth of the turn's steps: its plateau level. */
 function plateauRate(rates: readonly number[], n: number): number {
-  const sorted = rates
-    .slice(0, n)
-    .map(Math.abs)
-    .sort((x, y) => x - y);
-  return sorted[Math.floor(sorted.length * 0.9)] ?? 0;
+  // A typed array sorts numerically without a comparator call per pair.
+  const sorted = new Float64Array(n);
+  for (let i = 0; i < n; i++) sorted[i] = Math.abs(rates[i]!);
+  sorted.sort();
+  return sorted[Math.floor(n * 0.9)] ?? 0;
 }
 
 /** What push() returns for the many samples that finish no turn: shared, never changed. */
