@@ -1,7 +1,7 @@
 import "server-only";
 import { eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
-import { machines } from "@/db/schema";
+import { estimates, machines } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
 import { ZMachineRecordPatch, type TMachineDto } from "@/features/workspace/schemas/machine";
 import { parseOrThrow } from "@/features/workspace/server/errors";
@@ -29,23 +29,33 @@ export async function updateMachine({
       ? (await resolveCustomerField(db, actor, patch.customerId)).name
       : null;
   }
-  const [row] = await db
-    .update(machines)
-    .set({
-      ...(patch.customerId !== undefined ? { customerId: patch.customerId } : {}),
-      ...(patch.kind ? { kind: patch.kind } : {}),
-      ...(patch.spec
-        ? {
-            spec: patch.spec,
-            name: patch.spec.name,
-            layout: patch.spec.steering.layout,
-            version: current.machine.version + 1,
-          }
-        : {}),
-      updatedAt: new Date(),
-    })
-    .where(eq(machines.id, id))
-    .returning();
+  const row = await db.transaction(async (tx) => {
+    const [updated] = await tx
+      .update(machines)
+      .set({
+        ...(patch.customerId !== undefined ? { customerId: patch.customerId } : {}),
+        ...(patch.kind ? { kind: patch.kind } : {}),
+        ...(patch.spec
+          ? {
+              spec: patch.spec,
+              name: patch.spec.name,
+              layout: patch.spec.steering.layout,
+              version: current.machine.version + 1,
+            }
+          : {}),
+        updatedAt: new Date(),
+      })
+      .where(eq(machines.id, id))
+      .returning();
+    // A machine that changes hands takes its estimates along, so the new owner sees them and the
+    // old one no longer does.
+    if (updated && patch.customerId && patch.customerId !== current.machine.customerId)
+      await tx
+        .update(estimates)
+        .set({ customerId: patch.customerId })
+        .where(eq(estimates.machineId, id));
+    return updated;
+  });
   if (!row) throw new Error("update returned no machine");
   return toMachineDto(row, customerName);
 }

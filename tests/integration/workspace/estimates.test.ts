@@ -4,7 +4,7 @@ import { estimate, ENGINE_VERSION, type TDutyCycleInput, type TMachineInput } fr
 import { POST as createCustomer } from "@/app/api/v1/customers/route";
 import { POST as createSite } from "@/app/api/v1/sites/route";
 import { POST as createMachine } from "@/app/api/v1/machines/route";
-import { DELETE as deleteMachine } from "@/app/api/v1/machines/[id]/route";
+import { DELETE as deleteMachine, PATCH as patchMachine } from "@/app/api/v1/machines/[id]/route";
 import { GET as list, POST as create } from "@/app/api/v1/estimates/route";
 import { GET as getOne, PATCH as patch, DELETE as remove } from "@/app/api/v1/estimates/[id]/route";
 import { GET as csv } from "@/app/api/v1/estimates/[id]/csv/route";
@@ -264,6 +264,28 @@ describe("estimates API", () => {
       (await call(remove, mine.cookie, "x?confirm=true", { method: "DELETE", params: { id } }))
         .status,
     ).toBe(403);
+  });
+
+  it("a machine moved to another customer takes its estimates along", async () => {
+    const m = await call(createMachine, team.admin.cookie, "/api/v1/machines", {
+      method: "POST",
+      body: { customerId, kind: "tractor", spec: testTractorSpec({ name: "Sold on" }) },
+    });
+    const e = await call(create, team.admin.cookie, "/api/v1/estimates", {
+      method: "POST",
+      body: { machineId: m.body.id, dutyCycleId },
+    });
+    const moved = await call(patchMachine, team.admin.cookie, "x", {
+      method: "PATCH",
+      params: { id: m.body.id },
+      body: { customerId: otherCustomerId },
+    });
+    expect(moved.status).toBe(200);
+    const got = await call(getOne, team.admin.cookie, "x", { params: { id: e.body.id } });
+    expect(got.body).toMatchObject({
+      customerId: otherCustomerId,
+      customerName: "Coldharbour Farm",
+    });
   });
 
   it("deleting asks first; deleting the machine removes its estimates too", async () => {
