@@ -190,7 +190,8 @@ export function createTelematicsImporter(
         `goes back in time (${(run.prevT - t).toFixed(3)} s before the row above)`,
         tCell,
       );
-    if (t === run.prevT) return log.add(line, time!.name, "repeats the time of the row above", tCell);
+    if (t === run.prevT)
+      return log.add(line, time!.name, "repeats the time of the row above", tCell);
     const vCell = fields[speedIndex]!;
     const v = parseDecimal(vCell, decimal) * speedFactor;
     if (!Number.isFinite(v)) return log.add(line, speed!.name, "is not a number", vCell);

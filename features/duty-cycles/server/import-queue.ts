@@ -3,6 +3,8 @@ import PgBoss from "pg-boss";
 import { getEnv } from "@/lib/env";
 
 export const IMPORT_QUEUE = "duty-cycle-import";
+/** PostgreSQL NOTIFY channel that wakes idle workers as soon as a job is queued. */
+export const IMPORT_WAKE_CHANNEL = "treadcast_duty_cycle_import";
 
 export type TImportJob = { dutyCycleId: string };
 
@@ -46,5 +48,10 @@ export async function enqueueImport(dutyCycleId: string): Promise<string> {
     IMPORT_JOB_OPTIONS,
   );
   if (!id) throw new Error("The import queue did not accept the job.");
+  // Workers poll as well, so a lost notification only delays the job by one polling interval.
+  await boss
+    .getDb()
+    .executeSql("select pg_notify($1, '')", [IMPORT_WAKE_CHANNEL])
+    .catch(() => undefined);
   return id;
 }

@@ -1,9 +1,11 @@
 // The worker process's loop; started by scripts/worker.ts and by the integration tests.
 import PgBoss from "pg-boss";
+import { Client } from "pg";
 import type { Db } from "@/db/client";
 import {
   IMPORT_JOB_OPTIONS,
   IMPORT_QUEUE,
+  IMPORT_WAKE_CHANNEL,
   type TImportJob,
 } from "@/features/duty-cycles/server/import-queue";
 import { runImport } from "@/features/duty-cycles/server/run-import";
@@ -27,7 +29,7 @@ export async function startImportWorker({
   boss.on("error", (e) => console.error("[worker]", e));
   await boss.start();
   await boss.createQueue(IMPORT_QUEUE, { name: IMPORT_QUEUE, ...IMPORT_JOB_OPTIONS });
-  await boss.work<TImportJob>(
+  const workerId = await boss.work<TImportJob>(
     IMPORT_QUEUE,
     { batchSize: 1, pollingIntervalSeconds: 0.5 },
     async ([job]) => {
@@ -46,10 +48,27 @@ export async function startImportWorker({
       );
     },
   );
+  const wake = await listenForNewJobs(connectionString, () => boss.notifyWorker(workerId));
   return {
     boss,
     stop: async () => {
+      await wake.end().catch(() => undefined);
       await boss.stop({ graceful: true, wait: true, timeout: 10_000 });
     },
   };
+}
+
+/**
+ * Wakes the worker when a job is queued (LISTEN on the channel enqueueImport notifies), so an
+ * import starts at once rather than at the next poll. Polling stays on as the fallback.
+ */
+async function listenForNewJobs(connectionString: string, wake: () => void): Promise<Client> {
+  const client = new Client({ connectionString });
+  client.on("error", (e) => console.error("[worker] wake-up connection:", e.message));
+  client.on("notification", (n) => {
+    if (n.channel === IMPORT_WAKE_CHANNEL) wake();
+  });
+  await client.connect();
+  await client.query(`listen ${IMPORT_WAKE_CHANNEL}`);
+  return client;
 }

@@ -13,7 +13,7 @@ import { summariseDutyCycle } from "@/lib/duty-cycles/summarise";
 import type { TStoredTurn } from "@/lib/duty-cycles/stored-duty-cycle";
 import { readCsvRows } from "@/features/duty-cycles/server/read-csv-rows";
 import { uploadPath } from "@/features/duty-cycles/server/upload-storage";
-import { toTurnRow } from "@/features/duty-cycles/server/turn-rows";
+import { insertTurns } from "@/features/duty-cycles/server/insert-turns";
 
 const PROGRESS_EVERY_MS = 500;
 const INSERT_BATCH = 1000;
@@ -30,11 +30,7 @@ async function replaceContents(
 ) {
   await tx.delete(dutyCycleTurns).where(eq(dutyCycleTurns.dutyCycleId, dutyCycleId));
   await tx.delete(dutyCycleImportErrors).where(eq(dutyCycleImportErrors.dutyCycleId, dutyCycleId));
-  for (let i = 0; i < turns.length; i += INSERT_BATCH) {
-    await tx
-      .insert(dutyCycleTurns)
-      .values(turns.slice(i, i + INSERT_BATCH).map((t) => toTurnRow(dutyCycleId, t)));
-  }
+  await insertTurns(tx, dutyCycleId, turns);
   const rows = errors.map((e) => ({ dutyCycleId, ...e, truncated: false }));
   if (errorCount > errors.length)
     rows.push({
