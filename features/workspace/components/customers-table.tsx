@@ -9,6 +9,8 @@ import { DEFAULT_LISTS, type TListState } from "@/features/workspace/api/list-st
 import { ServerDataTable } from "@/features/workspace/components/server-data-table";
 import { formatDate } from "@/features/workspace/components/format";
 import { EmptyState } from "@/lib/ui/empty-state";
+import { Select } from "@/lib/ui/input";
+import { CUSTOMER_KINDS } from "@/features/workspace/schemas/customer";
 
 const columns: ColumnDef<TCustomerRow, unknown>[] = [
   {
@@ -59,6 +61,26 @@ export function CustomersTable({ canWrite }: { canWrite: boolean }) {
       searchLabel="Find a customer"
       getRowId={(r) => r.id}
       initiallyHidden={["updatedAt"]}
+      filters={
+        <label className="flex flex-col gap-1 text-sm font-medium text-ink-800">
+          Kind
+          <Select
+            value={state.filters.kind ?? ""}
+            onChange={(e) => {
+              const { kind: _old, ...rest } = state.filters;
+              const filters = e.target.value ? { ...rest, kind: e.target.value } : rest;
+              setState({ ...state, filters, page: 1 });
+            }}
+          >
+            <option value="">All kinds</option>
+            {CUSTOMER_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {k}
+              </option>
+            ))}
+          </Select>
+        </label>
+      }
       empty={
         <EmptyState
           title="No customers yet"

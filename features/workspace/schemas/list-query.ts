@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { ZCustomerKind } from "@/features/workspace/schemas/customer";
 
 /** Largest page a list endpoint returns; a bigger request is refused, not silently cut. */
 export const MAX_PAGE_SIZE = 100;
@@ -38,7 +39,12 @@ export function makeListQuery<const S extends readonly [string, ...string[]]>(
 
 const uuidFilter = z.uuid("Must be an id (UUID).").optional();
 
-export const ZCustomerListQuery = makeListQuery(["name", "kind", "updatedAt", "createdAt"], "name");
+export const ZCustomerListQuery = makeListQuery(
+  ["name", "kind", "updatedAt", "createdAt"],
+  "name",
+).extend({
+  kind: ZCustomerKind.optional(),
+});
 export type TCustomerListQuery = z.infer<typeof ZCustomerListQuery>;
 
 export const ZSiteListQuery = makeListQuery(["name", "updatedAt"], "name").extend({

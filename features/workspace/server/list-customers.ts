@@ -34,6 +34,7 @@ export async function listCustomers({
   const scope = customerScope(actor);
   if (scope) filters.push(eq(customers.id, scope));
   if (query.q) filters.push(ilike(customers.name, likePattern(query.q)));
+  if (query.kind) filters.push(eq(customers.kind, query.kind));
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
 

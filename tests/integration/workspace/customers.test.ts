@@ -134,6 +134,16 @@ describe("customers API", () => {
       expect(res.body).toMatchObject({ items: [], total: 24, pageCount: 3 });
     });
 
+    it("filters by kind and refuses an unknown kind", async () => {
+      const none = await call(list, cookie, "/api/v1/customers?kind=council");
+      expect(none.body.total).toBe(0);
+      const farms = await call(list, cookie, "/api/v1/customers?kind=farm&pageSize=100");
+      expect(farms.body.total).toBe(24);
+      const bad = await call(list, cookie, "/api/v1/customers?kind=spaceport");
+      expect(bad.status).toBe(400);
+      expect(bad.body.error.fieldErrors.kind).toBeDefined();
+    });
+
     it("sorts both ways", async () => {
       const asc = await call(
         list,
