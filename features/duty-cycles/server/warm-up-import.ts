@@ -18,6 +18,7 @@ const MAPPING: TColumnMapping = {
     lat: { index: 3, unit: "deg" },
     lon: { index: 4, unit: "deg" },
     surface: { index: 5, unit: "text" },
+    direction: { index: 6, unit: "text" },
   },
   defaults: { surface: "firm-soil", loadState: "unladen", shiftHours: 8, maxSpeed: 25 },
 };
@@ -34,9 +35,9 @@ export async function warmUpImport(): Promise<void> {
   ]).flat();
   const rows = samplePath({ legs, noise: { yawRate: 0.3 } }).map(
     (s) =>
-      `${s.t.toFixed(1)},${(s.speed * 3.6).toFixed(2)},${s.yawRate.toFixed(2)},${s.lat.toFixed(7)},${s.lon.toFixed(7)},soil`,
+      `${s.t.toFixed(1)},${(s.speed * 3.6).toFixed(2)},${s.yawRate.toFixed(2)},${s.lat.toFixed(7)},${s.lon.toFixed(7)},soil,${s.speed < 0 ? "R" : "F"}`,
   );
-  const text = "t,v,yaw,lat,lon,surface\n" + rows.join("\n") + "\n";
+  const text = "t,v,yaw,lat,lon,surface,gear\n" + rows.join("\n") + "\n";
   for (let round = 0; round < 4; round++) {
     const importer = createTelematicsImporter(MAPPING);
     await readCsvRows({
