@@ -1,35 +1,19 @@
-import { spawn, type ChildProcess } from "node:child_process";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { baseUrl, launchBrowser } from "@/tests/support/browser";
+import type { Browser } from "playwright-core";
+import { baseUrl, launchBrowser, signIn } from "@/tests/support/browser";
 import { uniqueTag } from "@/tests/support/session";
-import { DEMO_PASSWORD } from "@/scripts/seed/demo-accounts";
 import { KNOWN_TURNS, knownTelematicsCsv } from "@/tests/integration/duty-cycles/support";
 
 // The demo estimator uploads a small telematics log, maps its columns over the preview, and
 // watches it processed by the background worker and summarised. Invented data.
 
-async function signIn(page: Page, email: string) {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel("E-mail address").first().fill(email);
-  await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
-}
-
 describe("duty-cycle upload journey", () => {
   let browser: Browser;
-  let worker: ChildProcess;
   beforeAll(async () => {
     browser = await launchBrowser();
-    worker = spawn("node_modules/.bin/tsx", ["scripts/worker.ts"], {
-      env: process.env,
-      stdio: "inherit",
-    });
   });
   afterAll(async () => {
     await browser?.close();
-    worker?.kill("SIGTERM");
   });
 
   it("uploads a log, maps the columns, and shows it processed and summarised", async () => {

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import type { Browser } from "playwright-core";
 import { getDb, getPool } from "@/db/client";
-import { baseUrl, launchBrowser } from "@/tests/support/browser";
+import { baseUrl, launchBrowser, signIn } from "@/tests/support/browser";
 import { linkFrom, waitForMail } from "@/tests/support/mail";
 import { uniqueTag } from "@/tests/support/session";
 import { DEMO_PASSWORD } from "@/scripts/seed/demo-accounts";
@@ -12,14 +12,6 @@ import { DEMO_CUSTOMERS } from "@/scripts/seed/tenancy";
 const db = getDb();
 const invited = DEMO_CUSTOMERS.find((c) => c.key === "eastmere")!;
 const others = DEMO_CUSTOMERS.filter((c) => c.key !== "eastmere").map((c) => c.name);
-
-async function signIn(page: Page, email: string, password: string) {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel("E-mail address").fill(email);
-  await page.getByLabel("Password", { exact: true }).fill(password);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
-}
 
 describe("inviting a customer by e-mail", () => {
   let browser: Browser;

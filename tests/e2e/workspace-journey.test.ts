@@ -1,11 +1,9 @@
-import { spawn, type ChildProcess } from "node:child_process";
 import { readFile } from "node:fs/promises";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
+import type { Browser } from "playwright-core";
 import Papa from "papaparse";
-import { baseUrl, launchBrowser } from "@/tests/support/browser";
+import { baseUrl, launchBrowser, signIn } from "@/tests/support/browser";
 import { uniqueTag } from "@/tests/support/session";
-import { DEMO_PASSWORD } from "@/scripts/seed/demo-accounts";
 
 // An estimator's day in the workspace: a new customer, a tractor with a track-rod linkage, the
 // customer's turn schedule uploaded, an estimate run, its table read and its turns exported.
@@ -18,28 +16,13 @@ const SCHEDULE_CSV = [
   "=cmd|' /C calc'!A0,12,45,2,2,gravel,right",
 ].join("\n");
 
-async function signIn(page: Page, email: string) {
-  await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel("E-mail address").first().fill(email);
-  await page.getByLabel("Password", { exact: true }).fill(DEMO_PASSWORD);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
-}
-
 describe("workspace journey", () => {
   let browser: Browser;
-  let worker: ChildProcess;
   beforeAll(async () => {
     browser = await launchBrowser();
-    // The duty-cycle import runs in the background worker; start one beside the served app.
-    worker = spawn("node_modules/.bin/tsx", ["scripts/worker.ts"], {
-      env: process.env,
-      stdio: "inherit",
-    });
   });
   afterAll(async () => {
     await browser?.close();
-    worker?.kill("SIGTERM");
   });
 
   it("creates a customer and a linkage machine, uploads a duty cycle, runs an estimate and exports its turns", async () => {

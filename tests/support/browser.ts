@@ -1,4 +1,5 @@
-import { chromium, type Browser } from "playwright-core";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { DEMO_PASSWORD } from "@/scripts/seed/demo-accounts";
 
 /** Debian's Chromium, driven by playwright-core. Never downloads a browser. */
 export async function launchBrowser(): Promise<Browser> {
@@ -18,3 +19,12 @@ export async function launchBrowser(): Promise<Browser> {
 }
 
 export const baseUrl = `http://localhost:${process.env.E2E_PORT ?? "3100"}`;
+
+/** Signs in through the sign-in form, as a person would, and waits to leave the sign-in page. */
+export async function signIn(page: Page, email: string, password: string = DEMO_PASSWORD) {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel("E-mail address").first().fill(email);
+  await page.getByLabel("Password", { exact: true }).fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
+}

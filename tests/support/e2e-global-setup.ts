@@ -2,7 +2,8 @@ import { spawn, execFileSync, type ChildProcess } from "node:child_process";
 
 /**
  * Serves the production build made by `npm test` (NEXT_DIST_DIR=.next-test) against the test
- * database, with the local fakes beside it. Stops both when the e2e run ends.
+ * database, with the local fakes and the background worker beside it, as `npm start` does.
+ * Stops all three when the e2e run ends, or when the app fails to come up.
  */
 const port = process.env.E2E_PORT ?? "3100";
 
@@ -33,13 +34,20 @@ export default async function setup() {
   };
   const children: ChildProcess[] = [
     spawn("node_modules/.bin/tsx", ["mocks/run-fakes.ts"], { env, stdio: "inherit" }),
+    spawn("node_modules/.bin/tsx", ["scripts/worker.ts"], { env, stdio: "inherit" }),
     spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", port], {
       env,
       stdio: "inherit",
     }),
   ];
-  await waitForHttp(`http://localhost:${port}/api/health`, 60_000);
-  return async () => {
+  const stopAll = async () => {
     for (const child of children) child.kill("SIGTERM");
   };
+  try {
+    await waitForHttp(`http://localhost:${port}/api/health`, 60_000);
+  } catch (error) {
+    await stopAll();
+    throw error;
+  }
+  return stopAll;
 }

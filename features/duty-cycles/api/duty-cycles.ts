@@ -11,7 +11,7 @@ import type {
   TDutyCycleRow,
   TPage,
 } from "@/features/duty-cycles/schemas/duty-cycle";
-import { apiFetch } from "@/features/duty-cycles/api/http";
+import { apiFetch } from "@/lib/query/api-fetch";
 
 export type TDutyCycleListState = {
   page: number;

@@ -2,7 +2,7 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/r
 import type { TColumnMapping, TFileKind } from "@/lib/duty-cycles/column-mapping";
 import type { TMappingTemplate } from "@/features/duty-cycles/schemas/mapping-template";
 import type { TPage } from "@/features/duty-cycles/schemas/duty-cycle";
-import { apiFetch } from "@/features/duty-cycles/api/http";
+import { apiFetch } from "@/lib/query/api-fetch";
 
 export const mappingTemplateKeys = {
   all: ["mapping-templates"] as const,

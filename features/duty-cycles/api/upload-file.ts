@@ -1,5 +1,5 @@
 import { useMutation } from "@tanstack/react-query";
-import { ApiError, apiErrorOf } from "@/features/duty-cycles/api/http";
+import { ApiError, apiErrorOf } from "@/lib/query/api-fetch";
 
 export type TUploadResult = { id: string; originalName: string; sizeBytes: number; sha256: string };
 

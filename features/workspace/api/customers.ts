@@ -12,7 +12,7 @@ import type {
   TCustomerPatch,
   TCustomerRow,
 } from "@/features/workspace/schemas/customer";
-import { apiFetch, toQueryString } from "@/features/workspace/api/http";
+import { apiFetch, toQueryString } from "@/lib/query/api-fetch";
 import { listParams, type TListState } from "@/features/workspace/api/list-state";
 
 export const customerKeys = {

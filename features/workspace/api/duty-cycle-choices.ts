@@ -1,5 +1,5 @@
 import { useQuery } from "@tanstack/react-query";
-import { apiFetch } from "@/features/workspace/api/http";
+import { apiFetch } from "@/lib/query/api-fetch";
 
 /** The fields of a duty cycle the estimate form needs, read from the duty-cycles API. */
 export type TDutyCycleChoice = { id: string; name: string; status: string; customerId: string };

@@ -11,7 +11,7 @@ import type {
   TEstimateDto,
   TEstimateRow,
 } from "@/features/workspace/schemas/estimate";
-import { apiFetch, toQueryString } from "@/features/workspace/api/http";
+import { apiFetch, toQueryString } from "@/lib/query/api-fetch";
 import { removeFromLists, restoreLists } from "@/features/workspace/api/optimistic";
 import { listParams, type TListState } from "@/features/workspace/api/list-state";
 

@@ -12,7 +12,7 @@ import type {
   TMachineRecordPatch,
   TMachineRow,
 } from "@/features/workspace/schemas/machine";
-import { apiFetch, toQueryString } from "@/features/workspace/api/http";
+import { apiFetch, toQueryString } from "@/lib/query/api-fetch";
 import { removeFromLists, restoreLists } from "@/features/workspace/api/optimistic";
 import { listParams, type TListState } from "@/features/workspace/api/list-state";
 

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import type { TSearchResult } from "@/features/workspace/schemas/search";
-import { apiFetch } from "@/features/workspace/api/http";
+import { apiFetch } from "@/lib/query/api-fetch";
 
 export const searchKeys = {
   all: ["search"] as const,

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { TPage } from "@/features/workspace/schemas/list-query";
 import type { TSiteDto, TSiteInput, TSitePatch } from "@/features/workspace/schemas/site";
-import { apiFetch } from "@/features/workspace/api/http";
+import { apiFetch } from "@/lib/query/api-fetch";
 
 export const siteKeys = {
   all: ["sites"] as const,

@@ -15,7 +15,7 @@ import {
   type TCustomerValues,
 } from "@/features/workspace/schemas/customer";
 import { useCreateCustomer, useUpdateCustomer } from "@/features/workspace/api/customers";
-import { ApiError } from "@/features/workspace/api/http";
+import { ApiError } from "@/lib/query/api-fetch";
 
 const KIND_LABELS: Record<string, string> = {
   farm: "Farm",

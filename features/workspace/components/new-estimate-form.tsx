@@ -11,7 +11,7 @@ import { useMachines } from "@/features/workspace/api/machines";
 import { useCustomerSites } from "@/features/workspace/api/sites";
 import { useDutyCycleChoices } from "@/features/workspace/api/duty-cycle-choices";
 import { listState } from "@/features/workspace/api/list-state";
-import { ApiError } from "@/features/workspace/api/http";
+import { ApiError } from "@/lib/query/api-fetch";
 
 /** Pick customer, machine, duty cycle and (optionally) site, then run the engine. */
 export function NewEstimateForm({

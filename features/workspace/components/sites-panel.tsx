@@ -8,7 +8,7 @@ import { Input } from "@/lib/ui/input";
 import { toast } from "@/lib/ui/toast";
 import { SURFACE_LABELS, ZSurfaceMix } from "@/features/workspace/schemas/site";
 import { useCreateSite, useCustomerSites, useDeleteSite } from "@/features/workspace/api/sites";
-import { ApiError } from "@/features/workspace/api/http";
+import { ApiError } from "@/lib/query/api-fetch";
 
 const SURFACES = ZSurfaceKind.options;
 

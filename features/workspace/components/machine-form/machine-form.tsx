@@ -12,7 +12,7 @@ import { Input, Select } from "@/lib/ui/input";
 import { toast } from "@/lib/ui/toast";
 import { MACHINE_KINDS, type TMachineDto } from "@/features/workspace/schemas/machine";
 import { useCreateMachine, useUpdateMachine } from "@/features/workspace/api/machines";
-import { ApiError } from "@/features/workspace/api/http";
+import { ApiError } from "@/lib/query/api-fetch";
 import { FIELD_HELP } from "@/features/workspace/lib/field-help";
 import { machineFromSi } from "@/features/workspace/lib/machine-units";
 import { steeredAxles } from "@/features/workspace/lib/steering-layouts";

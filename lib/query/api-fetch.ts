@@ -5,11 +5,28 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fieldErrors: Record<string, string[]> = {},
+    /** The whole `error` object, for answers that carry more (e.g. what a delete would remove). */
     readonly body: Record<string, unknown> = {},
   ) {
     super(message);
     this.name = "ApiError";
   }
+}
+
+type TErrorBody = {
+  error?: { code?: string; message?: string; fieldErrors?: Record<string, string[]> };
+};
+
+/** Builds the ApiError for a non-2xx answer from its parsed JSON body (or null). */
+export function apiErrorOf(status: number, data: unknown): ApiError {
+  const err = (data as TErrorBody | null)?.error;
+  return new ApiError(
+    status,
+    err?.code ?? "http_error",
+    err?.message ?? `The server answered ${status}.`,
+    err?.fieldErrors ?? {},
+    (err ?? {}) as Record<string, unknown>,
+  );
 }
 
 /** Fetches JSON from the versioned API; non-2xx answers throw an ApiError with the server's words. */
@@ -33,21 +50,14 @@ export async function apiFetch<T>(
     );
   }
   const text = await res.text();
-  const data = text ? (JSON.parse(text) as unknown) : null;
-  if (!res.ok) {
-    const err = (
-      data as {
-        error?: { code?: string; message?: string; fieldErrors?: Record<string, string[]> };
-      } | null
-    )?.error;
-    throw new ApiError(
-      res.status,
-      err?.code ?? "http_error",
-      err?.message ?? `The server answered ${res.status}.`,
-      err?.fieldErrors ?? {},
-      (err ?? {}) as Record<string, unknown>,
-    );
+  let data: unknown = null;
+  try {
+    data = text ? JSON.parse(text) : null;
+  } catch {
+    // A proxy's HTML error page, say: the status alone then explains the refusal.
+    data = null;
   }
+  if (!res.ok) throw apiErrorOf(res.status, data);
   return data as T;
 }
 
