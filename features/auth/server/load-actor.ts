@@ -1,37 +1,62 @@
 import "server-only";
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { memberships, users } from "@/db/schema";
 import type { TActor, TRole } from "@/lib/authz/actor";
 import type { TSessionClaims } from "@/features/auth/server/session-cookie";
+
+/** The user with each membership, oldest first, in one round trip (no membership: one row of nulls). */
+function actorRows(db: DbOrTx) {
+  return db
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      unitSystem: users.unitSystem,
+      activeDealershipId: users.activeDealershipId,
+      sessionsValidFrom: users.sessionsValidFrom,
+      dealershipId: memberships.dealershipId,
+      role: memberships.role,
+      customerId: memberships.customerId,
+    })
+    .from(users)
+    .leftJoin(memberships, eq(memberships.userId, users.id))
+    .where(eq(users.id, sql.placeholder("userId")))
+    .orderBy(asc(memberships.createdAt), asc(memberships.id));
+}
+
+// Prepared once per database handle: skips building the SQL in JS and planning it in Postgres.
+const prepared = new WeakMap<object, ReturnType<ReturnType<typeof actorRows>["prepare"]>>();
 
 /**
  * Builds the actor from the database for a decoded session. Roles and the active dealership
  * always come from the database, so a removed member or a changed role takes effect at once.
  */
 export async function loadActor(db: DbOrTx, claims: TSessionClaims): Promise<TActor | null> {
-  const [user] = await db.select().from(users).where(eq(users.id, claims.userId)).limit(1);
+  let statement = prepared.get(db);
+  if (!statement) {
+    statement = actorRows(db).prepare("load_actor");
+    prepared.set(db, statement);
+  }
+  const rows = await statement.execute({ userId: claims.userId });
+  const user = rows[0];
   if (!user) return null;
   // A password reset signs out every session issued before it.
   if (user.sessionsValidFrom && claims.issuedAt !== null) {
     if (claims.issuedAt < Math.floor(user.sessionsValidFrom.getTime() / 1000)) return null;
   }
-  const rows = await db
-    .select()
-    .from(memberships)
-    .where(eq(memberships.userId, user.id))
-    .orderBy(asc(memberships.createdAt));
-  if (rows.length === 0) return null;
-  const activeId = rows.some((m) => m.dealershipId === user.activeDealershipId)
-    ? user.activeDealershipId
-    : rows[0]!.dealershipId;
-  const inActive = rows.filter((m) => m.dealershipId === activeId);
+  const member = rows.filter((m) => m.dealershipId !== null && m.role !== null);
+  if (member.length === 0) return null;
+  const activeId = member.some((m) => m.dealershipId === user.activeDealershipId)
+    ? user.activeDealershipId!
+    : member[0]!.dealershipId!;
+  const inActive = member.filter((m) => m.dealershipId === activeId);
   const customerRow = inActive.find((m) => m.role === "customer");
   return {
     userId: user.id,
     email: user.email,
     name: user.name,
-    dealershipId: activeId!,
+    dealershipId: activeId,
     roles: [...new Set(inActive.map((m) => m.role as TRole))],
     customerId: customerRow?.customerId ?? null,
     unitSystem: user.unitSystem,

@@ -1,5 +1,7 @@
 import "server-only";
-import { decode, encode } from "next-auth/jwt";
+import { hkdfSync } from "node:crypto";
+import { base64url, calculateJwkThumbprint, jwtDecrypt } from "jose";
+import { encode } from "next-auth/jwt";
 import { getEnv } from "@/lib/env";
 
 /** Cookie names Auth.js uses for the JWT session, over http and https. */
@@ -40,6 +42,49 @@ function readChunked(cookies: Map<string, string>, name: string): string | null 
   return parts.length ? parts.join("") : null;
 }
 
+type TDerivedKey = { key: Uint8Array; kid: string };
+const derivedKeys = new Map<string, Promise<TDerivedKey>>();
+
+/**
+ * The key Auth.js derives from the secret and cookie name (HKDF-SHA256, same info string and
+ * lengths as @auth/core's jwt module), with its JWK thumbprint. Deriving it costs more than the
+ * decryption itself, and it depends only on secret, salt and algorithm, so it is kept per process.
+ */
+function derivedKey(enc: string, secret: string, salt: string): Promise<TDerivedKey> {
+  const id = `${enc}\u0000${salt}\u0000${secret}`;
+  let found = derivedKeys.get(id);
+  if (!found) {
+    const length = enc === "A256CBC-HS512" ? 64 : enc === "A256GCM" ? 32 : 0;
+    if (!length) return Promise.reject(new Error(`unsupported content encryption ${enc}`));
+    const info = `Auth.js Generated Encryption Key (${salt})`;
+    const key = new Uint8Array(hkdfSync("sha256", secret, salt, info, length));
+    found = calculateJwkThumbprint(
+      { kty: "oct", k: base64url.encode(key) },
+      `sha${key.byteLength << 3}` as "sha256" | "sha384" | "sha512",
+    ).then((kid) => ({ key, kid }));
+    derivedKeys.set(id, found);
+  }
+  return found;
+}
+
+/** Auth.js's `decode` with the derived key cached; same algorithms, kid check and clock tolerance. */
+async function decodeSessionToken(token: string, secret: string, salt: string) {
+  const { payload } = await jwtDecrypt(
+    token,
+    async ({ kid, enc }) => {
+      const derived = await derivedKey(enc, secret, salt);
+      if (kid !== undefined && kid !== derived.kid) throw new Error("no matching secret");
+      return derived.key;
+    },
+    {
+      clockTolerance: 15,
+      keyManagementAlgorithms: ["dir"],
+      contentEncryptionAlgorithms: ["A256CBC-HS512", "A256GCM"],
+    },
+  );
+  return payload;
+}
+
 /** Decodes the session cookie (either name) into the user id it was issued for. */
 export async function readSessionClaims(
   cookies: Map<string, string>,
@@ -49,10 +94,9 @@ export async function readSessionClaims(
     const token = readChunked(cookies, name);
     if (!token) continue;
     try {
-      const payload = await decode({ token, secret, salt: name });
-      const userId = typeof payload?.sub === "string" ? payload.sub : null;
-      if (userId)
-        return { userId, issuedAt: typeof payload?.iat === "number" ? payload.iat : null };
+      const payload = await decodeSessionToken(token, secret, name);
+      const userId = typeof payload.sub === "string" ? payload.sub : null;
+      if (userId) return { userId, issuedAt: typeof payload.iat === "number" ? payload.iat : null };
     } catch {
       // Tampered, expired or signed with another secret: treat as signed out.
     }

@@ -7,11 +7,15 @@ import type { TCustomerListQuery, TPage } from "@/features/workspace/schemas/lis
 import type { TCustomerRow } from "@/features/workspace/schemas/customer";
 import { customerScope } from "@/features/workspace/server/authorize";
 import {
+  bind,
+  iso,
   likePattern,
   pageTotal,
+  pageWindow,
+  preparedShape,
+  shapeFlags,
   toPage,
   totalColumn,
-  iso,
 } from "@/features/workspace/server/paging";
 
 const sortColumns = {
@@ -30,36 +34,56 @@ export async function listCustomers({
   actor: TActor;
   query: TCustomerListQuery;
 }): Promise<TPage<TCustomerRow>> {
-  const filters: SQL[] = [eq(customers.dealershipId, actor.dealershipId)];
+  const params: Record<string, unknown> = {
+    dealershipId: actor.dealershipId,
+    ...pageWindow(query.page, query.pageSize),
+  };
+  const filters: SQL[] = [eq(customers.dealershipId, bind("dealershipId"))];
   const scope = customerScope(actor);
-  if (scope) filters.push(eq(customers.id, scope));
-  if (query.q) filters.push(ilike(customers.name, likePattern(query.q)));
-  if (query.kind) filters.push(eq(customers.kind, query.kind));
+  if (scope) {
+    filters.push(eq(customers.id, bind("scope")));
+    params.scope = scope;
+  }
+  if (query.q) {
+    filters.push(ilike(customers.name, bind("q")));
+    params.q = likePattern(query.q);
+  }
+  if (query.kind) {
+    filters.push(eq(customers.kind, bind("kind")));
+    params.kind = query.kind;
+  }
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
+  const shape = `customers:${query.sort}:${query.dir}:${shapeFlags(params)}`;
 
-  const rows = await db
-    .select({
-      id: customers.id,
-      name: customers.name,
-      kind: customers.kind,
-      contactName: customers.contactName,
-      updatedAt: customers.updatedAt,
-      machineCount: sql<number>`(select count(*)::int from ${machines} where ${machines.customerId} = ${customers.id})`,
-      siteCount: sql<number>`(select count(*)::int from ${sites} where ${sites.customerId} = ${customers.id})`,
-      total: totalColumn(customers, where),
-    })
-    .from(customers)
-    .where(where)
-    // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
-    .orderBy(order(sortColumns[query.sort]), order(customers.id))
-    .limit(query.pageSize)
-    .offset((query.page - 1) * query.pageSize);
-  const total = await pageTotal(rows, () =>
+  const rows = await preparedShape(db, shape, (name) =>
     db
-      .select({ n: sql<number>`count(*)::int` })
+      .select({
+        id: customers.id,
+        name: customers.name,
+        kind: customers.kind,
+        contactName: customers.contactName,
+        updatedAt: customers.updatedAt,
+        machineCount: sql<number>`(select count(*)::int from ${machines} where ${machines.customerId} = ${customers.id})`,
+        siteCount: sql<number>`(select count(*)::int from ${sites} where ${sites.customerId} = ${customers.id})`,
+        total: totalColumn(customers, where),
+      })
       .from(customers)
-      .where(where),
+      .where(where)
+      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .orderBy(order(sortColumns[query.sort]), order(customers.id))
+      .limit(bind("limit"))
+      .offset(bind("offset"))
+      .prepare(name),
+  ).execute(params);
+  const total = await pageTotal(rows, () =>
+    preparedShape(db, `${shape}:count`, (name) =>
+      db
+        .select({ n: sql<number>`count(*)::int` })
+        .from(customers)
+        .where(where)
+        .prepare(name),
+    ).execute(params),
   );
   return toPage(
     rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: iso(r.updatedAt) })),

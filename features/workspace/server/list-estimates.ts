@@ -6,7 +6,16 @@ import type { TActor } from "@/lib/authz/actor";
 import type { TEstimateListQuery, TPage } from "@/features/workspace/schemas/list-query";
 import type { TEstimateRow } from "@/features/workspace/schemas/estimate";
 import { customerScope } from "@/features/workspace/server/authorize";
-import { likePattern, pageTotal, toPage, totalColumn } from "@/features/workspace/server/paging";
+import {
+  bind,
+  likePattern,
+  pageTotal,
+  pageWindow,
+  preparedShape,
+  shapeFlags,
+  toPage,
+  totalColumn,
+} from "@/features/workspace/server/paging";
 import { toEstimateRow } from "@/features/workspace/server/estimate-dto";
 
 const sortColumns = {
@@ -27,45 +36,65 @@ export async function listEstimates({
   actor: TActor;
   query: TEstimateListQuery;
 }): Promise<TPage<TEstimateRow>> {
-  const filters: SQL[] = [eq(estimates.dealershipId, actor.dealershipId)];
+  const params: Record<string, unknown> = {
+    dealershipId: actor.dealershipId,
+    ...pageWindow(query.page, query.pageSize),
+  };
+  const filters: SQL[] = [eq(estimates.dealershipId, bind("dealershipId"))];
   const scope = customerScope(actor);
-  if (scope) filters.push(eq(estimates.customerId, scope));
-  if (query.customerId) filters.push(eq(estimates.customerId, query.customerId));
-  if (query.machineId) filters.push(eq(estimates.machineId, query.machineId));
+  if (scope) {
+    filters.push(eq(estimates.customerId, bind("scope")));
+    params.scope = scope;
+  }
+  if (query.customerId) {
+    filters.push(eq(estimates.customerId, bind("customerId")));
+    params.customerId = query.customerId;
+  }
+  if (query.machineId) {
+    filters.push(eq(estimates.machineId, bind("machineId")));
+    params.machineId = query.machineId;
+  }
   if (query.q) {
-    const pattern = likePattern(query.q);
-    filters.push(or(ilike(estimates.title, pattern), ilike(estimates.machineName, pattern))!);
+    filters.push(or(ilike(estimates.title, bind("q")), ilike(estimates.machineName, bind("q")))!);
+    params.q = likePattern(query.q);
   }
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
-  const rows = await db
-    .select({
-      id: estimates.id,
-      title: estimates.title,
-      customerId: estimates.customerId,
-      customerName: customers.name,
-      machineId: estimates.machineId,
-      machineName: estimates.machineName,
-      dutyCycleName: estimates.dutyCycleName,
-      costPerHour: estimates.costPerHour,
-      hoursToFirstReplacement: estimates.hoursToFirstReplacement,
-      firstToWear: estimates.firstToWear,
-      warningCount: estimates.warningCount,
-      createdAt: estimates.createdAt,
-      total: totalColumn(estimates, where),
-    })
-    .from(estimates)
-    .leftJoin(customers, eq(customers.id, estimates.customerId))
-    .where(where)
-    // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
-    .orderBy(order(sortColumns[query.sort]), order(estimates.id))
-    .limit(query.pageSize)
-    .offset((query.page - 1) * query.pageSize);
-  const total = await pageTotal(rows, () =>
+  const shape = `estimates:${query.sort}:${query.dir}:${shapeFlags(params)}`;
+  const rows = await preparedShape(db, shape, (name) =>
     db
-      .select({ n: sql<number>`count(*)::int` })
+      .select({
+        id: estimates.id,
+        title: estimates.title,
+        customerId: estimates.customerId,
+        customerName: customers.name,
+        machineId: estimates.machineId,
+        machineName: estimates.machineName,
+        dutyCycleName: estimates.dutyCycleName,
+        costPerHour: estimates.costPerHour,
+        hoursToFirstReplacement: estimates.hoursToFirstReplacement,
+        firstToWear: estimates.firstToWear,
+        warningCount: estimates.warningCount,
+        createdAt: estimates.createdAt,
+        total: totalColumn(estimates, where),
+      })
       .from(estimates)
-      .where(where),
+      .leftJoin(customers, eq(customers.id, estimates.customerId))
+      .where(where)
+      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .orderBy(order(sortColumns[query.sort]), order(estimates.id))
+      .limit(bind("limit"))
+      .offset(bind("offset"))
+      .prepare(name),
+  ).execute(params);
+  const total = await pageTotal(rows, () =>
+    preparedShape(db, `${shape}:count`, (name) =>
+      db
+        .select({ n: sql<number>`count(*)::int` })
+        .from(estimates)
+        .where(where)
+        .prepare(name),
+    ).execute(params),
   );
   return toPage(
     rows.map((r) => toEstimateRow(r, r.customerName)),

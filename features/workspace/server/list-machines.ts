@@ -7,9 +7,13 @@ import type { TMachineListQuery, TPage } from "@/features/workspace/schemas/list
 import type { TMachineRow } from "@/features/workspace/schemas/machine";
 import { customerScope } from "@/features/workspace/server/authorize";
 import {
+  bind,
   iso,
   likePattern,
   pageTotal,
+  pageWindow,
+  preparedShape,
+  shapeFlags,
   toPage,
   totalColumn,
 } from "@/features/workspace/server/paging";
@@ -31,44 +35,65 @@ export async function listMachines({
   actor: TActor;
   query: TMachineListQuery;
 }): Promise<TPage<TMachineRow>> {
-  const filters: SQL[] = [eq(machines.dealershipId, actor.dealershipId)];
+  const params: Record<string, unknown> = {
+    dealershipId: actor.dealershipId,
+    ...pageWindow(query.page, query.pageSize),
+  };
+  const filters: SQL[] = [eq(machines.dealershipId, bind("dealershipId"))];
   const scope = customerScope(actor);
-  if (scope) filters.push(eq(machines.customerId, scope));
-  if (query.customerId) filters.push(eq(machines.customerId, query.customerId));
-  if (query.layout) filters.push(eq(machines.layout, query.layout));
+  if (scope) {
+    filters.push(eq(machines.customerId, bind("scope")));
+    params.scope = scope;
+  }
+  if (query.customerId) {
+    filters.push(eq(machines.customerId, bind("customerId")));
+    params.customerId = query.customerId;
+  }
+  if (query.layout) {
+    filters.push(eq(machines.layout, bind("layout")));
+    params.layout = query.layout;
+  }
+  if (query.q) {
+    filters.push(or(ilike(machines.name, bind("q")), ilike(machines.kind, bind("q")))!);
+    params.q = likePattern(query.q);
+  }
+  // No value to bind: the template filter is part of the shape's name.
   if (query.template === "true") filters.push(isNull(machines.customerId));
   if (query.template === "false") filters.push(isNotNull(machines.customerId));
-  if (query.q) {
-    const pattern = likePattern(query.q);
-    filters.push(or(ilike(machines.name, pattern), ilike(machines.kind, pattern))!);
-  }
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
-  const rows = await db
-    .select({
-      id: machines.id,
-      customerId: machines.customerId,
-      customerName: customers.name,
-      name: machines.name,
-      kind: machines.kind,
-      layout: machines.layout,
-      version: machines.version,
-      updatedAt: machines.updatedAt,
-      estimateCount: sql<number>`(select count(*)::int from ${estimates} where ${estimates.machineId} = ${machines.id})`,
-      total: totalColumn(machines, where),
-    })
-    .from(machines)
-    .leftJoin(customers, eq(customers.id, machines.customerId))
-    .where(where)
-    // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
-    .orderBy(order(sortColumns[query.sort]), order(machines.id))
-    .limit(query.pageSize)
-    .offset((query.page - 1) * query.pageSize);
-  const total = await pageTotal(rows, () =>
+  const shape = `machines:${query.sort}:${query.dir}:${query.template ?? "-"}:${shapeFlags(params)}`;
+  const rows = await preparedShape(db, shape, (name) =>
     db
-      .select({ n: sql<number>`count(*)::int` })
+      .select({
+        id: machines.id,
+        customerId: machines.customerId,
+        customerName: customers.name,
+        name: machines.name,
+        kind: machines.kind,
+        layout: machines.layout,
+        version: machines.version,
+        updatedAt: machines.updatedAt,
+        estimateCount: sql<number>`(select count(*)::int from ${estimates} where ${estimates.machineId} = ${machines.id})`,
+        total: totalColumn(machines, where),
+      })
       .from(machines)
-      .where(where),
+      .leftJoin(customers, eq(customers.id, machines.customerId))
+      .where(where)
+      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .orderBy(order(sortColumns[query.sort]), order(machines.id))
+      .limit(bind("limit"))
+      .offset(bind("offset"))
+      .prepare(name),
+  ).execute(params);
+  const total = await pageTotal(rows, () =>
+    preparedShape(db, `${shape}:count`, (name) =>
+      db
+        .select({ n: sql<number>`count(*)::int` })
+        .from(machines)
+        .where(where)
+        .prepare(name),
+    ).execute(params),
   );
   return toPage(
     rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: iso(r.updatedAt) })),

@@ -6,7 +6,16 @@ import type { TActor } from "@/lib/authz/actor";
 import type { TPage, TSiteListQuery } from "@/features/workspace/schemas/list-query";
 import type { TSiteDto } from "@/features/workspace/schemas/site";
 import { customerScope } from "@/features/workspace/server/authorize";
-import { likePattern, pageTotal, toPage, totalColumn } from "@/features/workspace/server/paging";
+import {
+  bind,
+  likePattern,
+  pageTotal,
+  pageWindow,
+  preparedShape,
+  shapeFlags,
+  toPage,
+  totalColumn,
+} from "@/features/workspace/server/paging";
 import { toSiteDto } from "@/features/workspace/server/site-dto";
 
 const sortColumns = { name: sites.name, updatedAt: sites.updatedAt } as const;
@@ -20,27 +29,47 @@ export async function listSites({
   actor: TActor;
   query: TSiteListQuery;
 }): Promise<TPage<TSiteDto>> {
-  const filters: SQL[] = [eq(sites.dealershipId, actor.dealershipId)];
+  const params: Record<string, unknown> = {
+    dealershipId: actor.dealershipId,
+    ...pageWindow(query.page, query.pageSize),
+  };
+  const filters: SQL[] = [eq(sites.dealershipId, bind("dealershipId"))];
   const scope = customerScope(actor);
-  if (scope) filters.push(eq(sites.customerId, scope));
-  if (query.customerId) filters.push(eq(sites.customerId, query.customerId));
-  if (query.q) filters.push(ilike(sites.name, likePattern(query.q)));
+  if (scope) {
+    filters.push(eq(sites.customerId, bind("scope")));
+    params.scope = scope;
+  }
+  if (query.customerId) {
+    filters.push(eq(sites.customerId, bind("customerId")));
+    params.customerId = query.customerId;
+  }
+  if (query.q) {
+    filters.push(ilike(sites.name, bind("q")));
+    params.q = likePattern(query.q);
+  }
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
-  const rows = await db
-    .select({ site: sites, customerName: customers.name, total: totalColumn(sites, where) })
-    .from(sites)
-    .innerJoin(customers, eq(customers.id, sites.customerId))
-    .where(where)
-    // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
-    .orderBy(order(sortColumns[query.sort]), order(sites.id))
-    .limit(query.pageSize)
-    .offset((query.page - 1) * query.pageSize);
-  const total = await pageTotal(rows, () =>
+  const shape = `sites:${query.sort}:${query.dir}:${shapeFlags(params)}`;
+  const rows = await preparedShape(db, shape, (name) =>
     db
-      .select({ n: sql<number>`count(*)::int` })
+      .select({ site: sites, customerName: customers.name, total: totalColumn(sites, where) })
       .from(sites)
-      .where(where),
+      .innerJoin(customers, eq(customers.id, sites.customerId))
+      .where(where)
+      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .orderBy(order(sortColumns[query.sort]), order(sites.id))
+      .limit(bind("limit"))
+      .offset(bind("offset"))
+      .prepare(name),
+  ).execute(params);
+  const total = await pageTotal(rows, () =>
+    preparedShape(db, `${shape}:count`, (name) =>
+      db
+        .select({ n: sql<number>`count(*)::int` })
+        .from(sites)
+        .where(where)
+        .prepare(name),
+    ).execute(params),
   );
   return toPage(
     rows.map((r) => toSiteDto(r.site, r.customerName)),

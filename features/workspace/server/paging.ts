@@ -1,4 +1,5 @@
 import "server-only";
+import { createHash } from "node:crypto";
 import { sql, type SQL } from "drizzle-orm";
 import type { PgTable } from "drizzle-orm/pg-core";
 import type { TPage } from "@/features/workspace/schemas/list-query";
@@ -26,4 +27,41 @@ export async function pageTotal(rows: { total: number }[], count: () => Promise<
   if (rows[0]) return rows[0].total;
   const [r] = await count();
   return r?.n ?? 0;
+}
+
+// Prepared list statements per database handle, one per query shape (sort, direction and which
+// filters are present); values go in as placeholders, so the shapes are few and bounded.
+const statements = new WeakMap<object, Map<string, unknown>>();
+
+/**
+ * The prepared statement for one list shape, built on first use. It skips rebuilding the SQL in
+ * JS on every request, and Postgres plans it once per connection. `shape` names the shape in
+ * full; the statement's name in Postgres is a hash of it, as identifiers stop at 63 characters.
+ */
+export function preparedShape<P>(db: object, shape: string, build: (name: string) => P): P {
+  let byShape = statements.get(db);
+  if (!byShape) statements.set(db, (byShape = new Map()));
+  let statement = byShape.get(shape) as P | undefined;
+  if (!statement) {
+    statement = build(`tc_list_${createHash("sha1").update(shape).digest("hex").slice(0, 24)}`);
+    byShape.set(shape, statement);
+  }
+  return statement;
+}
+
+/** Limit and offset of a page, as placeholder values. */
+export const pageWindow = (page: number, pageSize: number) => ({
+  limit: pageSize,
+  offset: (page - 1) * pageSize,
+});
+
+/** A placeholder to bind a filter value at execution. */
+export const bind = (name: string) => sql.placeholder(name);
+
+/** Which optional filters a list request binds, as a short stable part of a statement name. */
+export function shapeFlags(params: Record<string, unknown>): string {
+  return Object.keys(params)
+    .filter((k) => !["dealershipId", "limit", "offset"].includes(k))
+    .sort()
+    .join(",");
 }
