@@ -1,3 +1,4 @@
+import { APP_ORIGIN } from "@/tests/support/origin";
 import { afterAll, describe, expect, it } from "vitest";
 import { and, eq } from "drizzle-orm";
 import { NextRequest } from "next/server";
@@ -19,7 +20,7 @@ const { createTestMember, requestAs, uniqueTag } = await import("@/tests/support
 const { linkFrom, waitForMail } = await import("@/tests/support/mail");
 
 const db = getDb();
-const ORIGIN = "http://localhost:3000";
+const ORIGIN = APP_ORIGIN;
 
 afterAll(async () => {
   await smtp.stop();
