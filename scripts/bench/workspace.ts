@@ -32,6 +32,7 @@ const PORT = process.env.PORT ?? "3000";
 const DIST = process.env.NEXT_DIST_DIR ?? ".next";
 const DURATION = Number(process.env.BENCH_DURATION ?? 10);
 const CONNECTIONS = 50;
+const PROCESSES = Number(process.env.BENCH_PROCESSES ?? 1);
 const BASE = `http://localhost:${PORT}`;
 const SLUG = "bench-ridgeway";
 const EMAIL = "bench-admin@ridgeway.test";
@@ -234,11 +235,15 @@ async function main() {
     APP_URL: BASE,
     AUTH_URL: BASE,
   };
-  const server = spawn(
-    "node",
-    ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", PORT],
-    { env, stdio: "ignore" },
-  );
+  const startArgs = ["start", "-H", "127.0.0.1", "-p", PORT];
+  // BENCH_PROCESSES > 1 runs that many `next start` processes behind the port (node:cluster).
+  const server =
+    PROCESSES > 1
+      ? spawn("node", ["scripts/bench/next-cluster.mjs", String(PROCESSES), "--", ...startArgs], {
+          env,
+          stdio: "ignore",
+        })
+      : spawn("node", ["node_modules/next/dist/bin/next", ...startArgs], { env, stdio: "ignore" });
   const browser = await launchBrowser();
   try {
     await waitFor(`${BASE}/api/health`, 30_000);
@@ -260,6 +265,8 @@ async function main() {
       "/api/v1/estimates?pageSize=25&page=200&sort=costPerHour&dir=desc",
       "/api/v1/machines?pageSize=25&layout=trapezoid&q=row-crop&sort=updatedAt&dir=desc",
       "/api/v1/search?q=ridge",
+      // Reference, not a list: the framework plus one `select 1`, no session.
+      "/api/health",
     ];
     // One short untimed pass so the server's code paths are compiled before measuring.
     await autocannon({
@@ -275,7 +282,7 @@ async function main() {
       const solo = await load(path, cookie, 1, 3);
       rows.push(r);
       console.log(
-        `[bench] ${path}: ${r.rps.toFixed(0)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, p99 ${r.p99.toFixed(1)} ms, non-2xx ${r.non2xx}; one client: p50 ${solo.p50.toFixed(1)} ms, p95 ${solo.p95.toFixed(1)} ms`,
+        `[bench] ${path}: ${r.rps.toFixed(0)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, p99 ${r.p99.toFixed(1)} ms, non-2xx ${r.non2xx}; one client: p50 ${solo.p50.toFixed(1)} ms, p95 ${solo.p95.toFixed(1)} ms; load ${os.loadavg()[0]!.toFixed(2)}`,
       );
     }
 
@@ -309,7 +316,10 @@ async function main() {
       `[bench] /estimates LCP over ${lcps.length} cold loads: median ${percentile(lcps, 50).toFixed(0)} ms, worst ${lcps[lcps.length - 1]!.toFixed(0)} ms`,
     );
     console.log(
-      `[bench] machine: ${os.cpus().length} × ${os.cpus()[0]?.model ?? "cpu"}, node ${process.version}, ${CONNECTIONS} connections, ${DURATION} s per endpoint`,
+      `[bench] machine: ${os.cpus().length} × ${os.cpus()[0]?.model ?? "cpu"}, node ${process.version}, ${CONNECTIONS} connections, ${DURATION} s per endpoint, ${PROCESSES} server process(es), load average ${os
+        .loadavg()
+        .map((l) => l.toFixed(2))
+        .join(" ")}`,
     );
     const worstP95 = Math.max(...rows.map((r) => r.p95));
     console.log(
