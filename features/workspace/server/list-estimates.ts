@@ -61,8 +61,21 @@ export async function listEstimates({
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
   const shape = `estimates:${query.sort}:${query.dir}:${shapeFlags(params)}`;
-  const rows = await preparedShape(db, shape, (name) =>
+  // Deferred join: the page's ids first (the index alone walks past the skipped rows), then
+  // the columns and the customer's name for those rows only, so deep pages stay cheap.
+  const pageIds = () =>
     db
+      .select({ id: estimates.id })
+      .from(estimates)
+      .where(where)
+      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .orderBy(order(sortColumns[query.sort]), order(estimates.id))
+      .limit(bind("limit"))
+      .offset(bind("offset"))
+      .as("page_ids");
+  const rows = await preparedShape(db, shape, (name) => {
+    const page = pageIds();
+    return db
       .select({
         id: estimates.id,
         title: estimates.title,
@@ -78,15 +91,12 @@ export async function listEstimates({
         createdAt: estimates.createdAt,
         total: totalColumn(estimates, where),
       })
-      .from(estimates)
+      .from(page)
+      .innerJoin(estimates, eq(estimates.id, page.id))
       .leftJoin(customers, eq(customers.id, estimates.customerId))
-      .where(where)
-      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
       .orderBy(order(sortColumns[query.sort]), order(estimates.id))
-      .limit(bind("limit"))
-      .offset(bind("offset"))
-      .prepare(name),
-  ).execute(params);
+      .prepare(name);
+  }).execute(params);
   const total = await pageTotal(rows, () =>
     preparedShape(db, `${shape}:count`, (name) =>
       db
