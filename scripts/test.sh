@@ -23,6 +23,10 @@ cleanup() {
 trap cleanup INT TERM EXIT
 "$PGBIN/pg_isready" -q -h 127.0.0.1 -p "$PGPORT" || STARTED_PG=1
 pg_up .pgdata-test "$PGPORT" "$DB_NAME" TEST_PGPORT
+# Every run starts from an empty database, so rate-limit counters and rows left by an earlier run
+# cannot change the outcome.
+"$PGBIN/dropdb" -h 127.0.0.1 -p "$PGPORT" -U postgres --if-exists --force "$DB_NAME"
+"$PGBIN/createdb" -h 127.0.0.1 -p "$PGPORT" -U postgres "$DB_NAME"
 export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT/$DB_NAME"
 export APP_URL="http://localhost:$E2E_PORT"
 export AUTH_URL="$APP_URL"

@@ -234,7 +234,7 @@ export function ServerDataTable<T>({
                   ? "No rows"
                   : `Rows ${(page.page - 1) * page.pageSize + 1}–${Math.min(page.page * page.pageSize, page.total)} of ${page.total}`}
               </p>
-              <div className="flex items-center gap-2">
+              <div className="flex flex-wrap items-center gap-2">
                 <label className="flex items-center gap-2">
                   <span className="whitespace-nowrap">Rows per page</span>
                   <Select
