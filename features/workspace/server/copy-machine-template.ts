@@ -5,6 +5,7 @@ import type { TMachineInput } from "@/lib/scrub";
 import { ZCopyTemplateInput, type TMachineDto } from "@/features/workspace/schemas/machine";
 import { parseOrThrow, WorkspaceError } from "@/features/workspace/server/errors";
 import { loadMachine } from "@/features/workspace/server/get-machine";
+import { assertMayWrite } from "@/features/workspace/server/authorize";
 import { createMachine } from "@/features/workspace/server/create-machine";
 
 /** Copies a dealership template (or any machine) to a customer, remembering where it came from. */
@@ -20,6 +21,8 @@ export async function copyMachineTemplate({
   input: unknown;
 }): Promise<TMachineDto> {
   const { machine } = await loadMachine(db, actor, id, "read");
+  // The role decides before the body: a read-only account gets 403, not a field error.
+  assertMayWrite(actor, "machine");
   const values = parseOrThrow(ZCopyTemplateInput, input);
   const spec = machine.spec as TMachineInput;
   if (!spec || typeof spec !== "object")

@@ -5,6 +5,7 @@ import type { TActor } from "@/lib/authz/actor";
 import { ZSiteInput, type TSiteDto } from "@/features/workspace/schemas/site";
 import { parseOrThrow } from "@/features/workspace/server/errors";
 import { resolveCustomerField } from "@/features/workspace/server/resolve-customer";
+import { assertMayWrite } from "@/features/workspace/server/authorize";
 import { toSiteDto } from "@/features/workspace/server/site-dto";
 
 export async function createSite({
@@ -16,6 +17,8 @@ export async function createSite({
   actor: TActor;
   input: unknown;
 }): Promise<TSiteDto> {
+  // The role decides before the body: a read-only account gets 403, not a field error.
+  assertMayWrite(actor, "site");
   const values = parseOrThrow(ZSiteInput, input);
   const customer = await resolveCustomerField(db, actor, values.customerId);
   const [row] = await db

@@ -91,6 +91,15 @@ describe("sites API", () => {
     expect(res.body.error.fieldErrors.customerId).toBeDefined();
   });
 
+  it("a read-only role is refused before its body is read: 403, not a field error", async () => {
+    const res = await call(create, team.billing.cookie, "/api/v1/sites", {
+      method: "POST",
+      body: {},
+    });
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe("forbidden");
+  });
+
   it("refuses page sizes above 100", async () => {
     const res = await call(list, team.admin.cookie, "/api/v1/sites?pageSize=500");
     expect(res.status).toBe(400);
