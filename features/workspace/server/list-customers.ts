@@ -76,15 +76,7 @@ export async function listCustomers({
       .offset(bind("offset"))
       .prepare(name),
   ).execute(params);
-  const total = await pageTotal(rows, () =>
-    preparedShape(db, `${shape}:count`, (name) =>
-      db
-        .select({ n: sql<number>`count(*)::int` })
-        .from(customers)
-        .where(where)
-        .prepare(name),
-    ).execute(params),
-  );
+  const total = await pageTotal({ db, rows, shape, table: customers, where, params });
   return toPage(
     rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: iso(r.updatedAt) })),
     total,

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
+import { and, asc, desc, eq, ilike, or, type SQL } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { customers, estimates } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
@@ -97,15 +97,7 @@ export async function listEstimates({
       .orderBy(order(sortColumns[query.sort]), order(estimates.id))
       .prepare(name);
   }).execute(params);
-  const total = await pageTotal(rows, () =>
-    preparedShape(db, `${shape}:count`, (name) =>
-      db
-        .select({ n: sql<number>`count(*)::int` })
-        .from(estimates)
-        .where(where)
-        .prepare(name),
-    ).execute(params),
-  );
+  const total = await pageTotal({ db, rows, shape, table: estimates, where, params });
   return toPage(
     rows.map((r) => toEstimateRow(r, r.customerName)),
     total,

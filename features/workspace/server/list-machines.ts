@@ -86,15 +86,7 @@ export async function listMachines({
       .offset(bind("offset"))
       .prepare(name),
   ).execute(params);
-  const total = await pageTotal(rows, () =>
-    preparedShape(db, `${shape}:count`, (name) =>
-      db
-        .select({ n: sql<number>`count(*)::int` })
-        .from(machines)
-        .where(where)
-        .prepare(name),
-    ).execute(params),
-  );
+  const total = await pageTotal({ db, rows, shape, table: machines, where, params });
   return toPage(
     rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: iso(r.updatedAt) })),
     total,

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, desc, eq, ilike, sql, type SQL } from "drizzle-orm";
+import { and, asc, desc, eq, ilike, type SQL } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { customers, sites } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
@@ -62,15 +62,7 @@ export async function listSites({
       .offset(bind("offset"))
       .prepare(name),
   ).execute(params);
-  const total = await pageTotal(rows, () =>
-    preparedShape(db, `${shape}:count`, (name) =>
-      db
-        .select({ n: sql<number>`count(*)::int` })
-        .from(sites)
-        .where(where)
-        .prepare(name),
-    ).execute(params),
-  );
+  const total = await pageTotal({ db, rows, shape, table: sites, where, params });
   return toPage(
     rows.map((r) => toSiteDto(r.site, r.customerName)),
     total,

@@ -2,6 +2,7 @@ import "server-only";
 import { createHash } from "node:crypto";
 import { sql, type SQL } from "drizzle-orm";
 import type { PgTable } from "drizzle-orm/pg-core";
+import type { DbOrTx } from "@/db/client";
 import type { TPage } from "@/features/workspace/schemas/list-query";
 
 export function toPage<T>(items: T[], total: number, page: number, pageSize: number): TPage<T> {
@@ -22,10 +23,33 @@ export const iso = (d: Date) => d.toISOString();
 export const totalColumn = (table: PgTable, where: SQL | undefined) =>
   sql<number>`(select count(*)::int from ${table} where ${where})`;
 
-/** The total from the page's first row; past the last page there is no row, so count apart. */
-export async function pageTotal(rows: { total: number }[], count: () => Promise<{ n: number }[]>) {
+/**
+ * The total from the page's first row; past the last page there is no row, so count apart with
+ * the list's own filter (a prepared statement of its own, named after the list's shape).
+ */
+export async function pageTotal({
+  db,
+  rows,
+  shape,
+  table,
+  where,
+  params,
+}: {
+  db: DbOrTx;
+  rows: { total: number }[];
+  shape: string;
+  table: PgTable;
+  where: SQL | undefined;
+  params: Record<string, unknown>;
+}): Promise<number> {
   if (rows[0]) return rows[0].total;
-  const [r] = await count();
+  const [r] = await preparedShape(db, `${shape}:count`, (name) =>
+    db
+      .select({ n: sql<number>`count(*)::int` })
+      .from(table)
+      .where(where)
+      .prepare(name),
+  ).execute(params);
   return r?.n ?? 0;
 }
 
