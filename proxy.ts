@@ -1,10 +1,38 @@
-// Sends signed-out visitors of signed-in pages to /sign-in. Not authorization: every route
-// handler, server action and page still resolves the actor and checks the policy.
-export { auth as proxy } from "@/features/auth/server/auth-config";
+// Runs before every page (not API routes: they answer 401 themselves, and a proxy would buffer
+// large upload bodies). Two jobs: send signed-out visitors of signed-in pages to /sign-in, and
+// give each page response a Content-Security-Policy with a fresh script nonce. The redirect is
+// not authorization: every route handler, server action and page still checks the policy.
+import { NextResponse } from "next/server";
+import { auth } from "@/features/auth/server/auth-config";
+import { pageCsp } from "@/lib/platform/security-headers.mjs";
+
+/** Pages a signed-out visitor may open: home, sign-in, invitation, password reset, dev pages. */
+const PUBLIC_PAGE = /^\/(?:$|sign-in(?:\/|$)|invite\/|reset-password(?:\/|$)|dev\/)/;
+
+export const proxy = auth((req) => {
+  const { pathname } = req.nextUrl;
+  if (!req.auth?.user && !PUBLIC_PAGE.test(pathname)) {
+    const signIn = req.nextUrl.clone();
+    signIn.pathname = "/sign-in";
+    signIn.search = "";
+    signIn.searchParams.set("callbackUrl", req.nextUrl.href);
+    return NextResponse.redirect(signIn);
+  }
+  const nonce = btoa(crypto.randomUUID());
+  const csp = pageCsp(nonce);
+  // Next reads the nonce from the request's CSP header and stamps it on its inline scripts.
+  const requestHeaders = new Headers(req.headers);
+  requestHeaders.set("content-security-policy", csp);
+  requestHeaders.set("x-nonce", nonce);
+  const res = NextResponse.next({ request: { headers: requestHeaders } });
+  res.headers.set("Content-Security-Policy", csp);
+  // Only the home page belongs in search indexes (robots.txt says the same to crawlers).
+  if (pathname !== "/") res.headers.set("X-Robots-Tag", "noindex, nofollow");
+  return res;
+});
 
 export const config = {
-  // Every page except the public ones (home, sign-in, invitation, password reset, dev mailbox),
-  // API routes (they answer 401 themselves), Next's assets and files with an extension. A new
-  // workspace page is covered without editing this list.
-  matcher: ["/((?!api/|_next/|sign-in|invite/|reset-password|dev/)(?!.*\\.\\w+$).+)"],
+  // Every page; not API routes, Next's assets or files with an extension (public/). A new page
+  // is covered without editing this list.
+  matcher: ["/((?!api/|_next/|.*\\.\\w+$).*)"],
 };

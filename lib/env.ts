@@ -31,6 +31,11 @@ const ZEnv = z.object({
     .default("false")
     .transform((v) => v === "true"),
   UPLOAD_DIR: z.string().default("var/uploads"),
+  /** The duty-cycle import queue's name; a test gives its own workers a queue of their own. */
+  IMPORT_QUEUE: z
+    .string()
+    .regex(/^[\w.-]+$/, "IMPORT_QUEUE may hold letters, digits, '_', '.' and '-' only")
+    .default("duty-cycle-import"),
   UPLOAD_LIMIT_BYTES: z.coerce
     .number()
     .int()

@@ -97,6 +97,10 @@ export const dutyCycles = pgTable(
     jobId: text(),
     attempts: integer().notNull().default(0),
     processingStartedAt: timestamp({ withTimezone: true }),
+    /** Renewed every few seconds by the worker running the import; a stale one means it died. */
+    heartbeatAt: timestamp({ withTimezone: true }),
+    /** Times an import was taken back from a worker that stopped mid-way and queued again. */
+    interruptions: integer().notNull().default(0),
     processedAt: timestamp({ withTimezone: true }),
     version: integer().notNull().default(1),
     createdById: text().references(() => users.id, { onDelete: "set null" }),

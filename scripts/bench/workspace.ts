@@ -259,32 +259,50 @@ async function main() {
 
     const endpoints = [
       "/api/v1/customers?pageSize=25&sort=name",
+      "/api/v1/customers?pageSize=25&page=15&sort=updatedAt&dir=desc",
+      "/api/v1/customers?pageSize=25&q=moor",
       "/api/v1/sites?pageSize=25",
       "/api/v1/machines?pageSize=25&sort=name",
+      "/api/v1/machines?pageSize=25&page=60&sort=customerName",
       "/api/v1/estimates?pageSize=25&sort=createdAt&dir=desc",
       "/api/v1/estimates?pageSize=25&page=200&sort=costPerHour&dir=desc",
       "/api/v1/machines?pageSize=25&layout=trapezoid&q=row-crop&sort=updatedAt&dir=desc",
       "/api/v1/search?q=ridge",
-      // Reference, not a list: the framework plus one `select 1`, no session.
-      "/api/health",
     ];
+    // Reference, not a list: the framework plus one `select 1`, no session. Measured before and
+    // after the lists, so each list's share of it comes from the same run on the same box.
+    const HEALTH = "/api/health";
     // One short untimed pass so the server's code paths are compiled before measuring.
     await autocannon({
-      url: `${BASE}${endpoints[3]}`,
+      url: `${BASE}${endpoints[6]}`,
       connections: 10,
       duration: 2,
       headers: { cookie },
     });
+    const print = (r: Awaited<ReturnType<typeof load>>, solo: Awaited<ReturnType<typeof load>>) =>
+      console.log(
+        `[bench] ${r.path}: ${r.rps.toFixed(0)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, p99 ${r.p99.toFixed(1)} ms, non-2xx ${r.non2xx}; one client: p50 ${solo.p50.toFixed(1)} ms, p95 ${solo.p95.toFixed(1)} ms; load ${os.loadavg()[0]!.toFixed(2)}`,
+      );
+    const healthBefore = await load(HEALTH, "");
+    print(healthBefore, await load(HEALTH, "", 1, 3));
     const rows = [];
     for (const path of endpoints) {
       const r = await load(path, cookie);
       // One client alone: the time a request takes when it does not queue behind others.
       const solo = await load(path, cookie, 1, 3);
       rows.push(r);
-      console.log(
-        `[bench] ${path}: ${r.rps.toFixed(0)} req/s, p50 ${r.p50.toFixed(1)} ms, p95 ${r.p95.toFixed(1)} ms, p99 ${r.p99.toFixed(1)} ms, non-2xx ${r.non2xx}; one client: p50 ${solo.p50.toFixed(1)} ms, p95 ${solo.p95.toFixed(1)} ms; load ${os.loadavg()[0]!.toFixed(2)}`,
-      );
+      print(r, solo);
     }
+    const healthAfter = await load(HEALTH, "");
+    print(healthAfter, await load(HEALTH, "", 1, 3));
+    const healthRps = (healthBefore.rps + healthAfter.rps) / 2;
+    console.log(
+      `[bench] /api/health: ${healthBefore.rps.toFixed(0)} req/s before the lists, ${healthAfter.rps.toFixed(0)} after; ratios below use the mean, ${healthRps.toFixed(0)} req/s`,
+    );
+    for (const r of rows)
+      console.log(
+        `[bench] ratio ${((100 * r.rps) / healthRps).toFixed(0).padStart(3)} % of /api/health  ${r.path}${r.rps >= healthRps / 2 ? "" : "  (below the 50 % goal)"}`,
+      );
 
     // Largest contentful paint of the estimates list, cold browser cache each time.
     const lcps: number[] = [];

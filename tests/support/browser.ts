@@ -1,9 +1,13 @@
-import { chromium, type Browser, type Page } from "playwright-core";
+import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { DEMO_PASSWORD } from "@/scripts/seed/demo-accounts";
 
-/** Debian's Chromium, driven by playwright-core. Never downloads a browser. */
+/**
+ * Debian's Chromium, driven by playwright-core. Never downloads a browser. Every page it opens
+ * is watched for Content-Security-Policy violations, and closing the browser fails the test file
+ * if there were any, so every journey also proves the CSP lets the app run.
+ */
 export async function launchBrowser(): Promise<Browser> {
-  return chromium.launch({
+  const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     args: [
       "--headless",
@@ -16,6 +20,38 @@ export async function launchBrowser(): Promise<Browser> {
       "--disable-sync",
     ],
   });
+  const violations: string[] = [];
+  const watch = (page: Page) =>
+    page.on("console", (m) => {
+      if (/Content Security Policy/i.test(m.text()) && !exempt.has(page))
+        violations.push(`${page.url()}: ${m.text()}`);
+    });
+  const newContext = browser.newContext.bind(browser);
+  browser.newContext = async (...args: Parameters<Browser["newContext"]>) => {
+    const context: BrowserContext = await newContext(...args);
+    context.on("page", watch);
+    return context;
+  };
+  const newPage = browser.newPage.bind(browser);
+  browser.newPage = async (...args: Parameters<Browser["newPage"]>) => {
+    const page = await newPage(...args);
+    watch(page);
+    return page;
+  };
+  const close = browser.close.bind(browser);
+  browser.close = async (...args: Parameters<Browser["close"]>) => {
+    await close(...args);
+    if (violations.length)
+      throw new Error(`Content-Security-Policy violations:\n${violations.join("\n")}`);
+  };
+  return browser;
+}
+
+const exempt = new WeakSet<Page>();
+
+/** For a test that provokes a violation on purpose: that page's violations are not failures. */
+export function cspViolationsSeenOnPurpose(page: Page) {
+  exempt.add(page);
 }
 
 export const baseUrl = `http://localhost:${process.env.E2E_PORT ?? "3100"}`;

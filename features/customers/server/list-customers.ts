@@ -57,8 +57,23 @@ export async function listCustomers({
   const order = query.dir === "desc" ? desc : asc;
   const shape = `customers:${query.sort}:${query.dir}:${shapeFlags(params)}`;
 
-  const rows = await preparedShape(db, shape, (name) =>
+  // Deferred join: the page's ids first (the index alone walks past the skipped rows), then the
+  // columns and counts for those rows only. The join also makes Drizzle qualify every column, so
+  // the count subqueries compare machines.customerId with customers.id (in a one-table select
+  // both rendered as bare names and matched the machine's own id: every count read 0).
+  const pageIds = () =>
     db
+      .select({ id: customers.id })
+      .from(customers)
+      .where(where)
+      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .orderBy(order(sortColumns[query.sort]), order(customers.id))
+      .limit(bind("limit"))
+      .offset(bind("offset"))
+      .as("page_ids");
+  const rows = await preparedShape(db, shape, (name) => {
+    const page = pageIds();
+    return db
       .select({
         id: customers.id,
         name: customers.name,
@@ -69,14 +84,11 @@ export async function listCustomers({
         siteCount: sql<number>`(select count(*)::int from ${sites} where ${sites.customerId} = ${customers.id})`,
         total: totalColumn(customers, where),
       })
-      .from(customers)
-      .where(where)
-      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .from(page)
+      .innerJoin(customers, eq(customers.id, page.id))
       .orderBy(order(sortColumns[query.sort]), order(customers.id))
-      .limit(bind("limit"))
-      .offset(bind("offset"))
-      .prepare(name),
-  ).execute(params);
+      .prepare(name);
+  }).execute(params);
   const total = await pageTotal({ db, rows, shape, table: customers, where, params });
   return toPage(
     rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: iso(r.updatedAt) })),

@@ -70,6 +70,15 @@ export function DutyCycleDetail({ id, canWrite }: { id: string; canWrite: boolea
         </Card>
       ) : null}
 
+      {cycle.interruptions > 0 ? (
+        <p className="rounded-md bg-caution-50 px-3 py-2 text-sm text-caution-800" role="status">
+          {cycle.status === "ready" ? "Imported on a retry: " : "Retried automatically: "}
+          the worker processing this file stopped part-way{" "}
+          {cycle.interruptions === 1 ? "once" : `${cycle.interruptions} times`}. Nothing from an
+          interrupted attempt was kept.
+        </p>
+      ) : null}
+
       {cycle.status === "failed" ? (
         <Caution title="The import failed" tone="danger">
           <p>{cycle.failureReason}</p>

@@ -91,6 +91,8 @@ export type TDutyCycleDetail = TDutyCycleRow & {
   rowsUsed: number;
   rowsSkipped: number;
   attempts: number;
+  /** Times the import was queued again because the worker running it stopped. */
+  interruptions: number;
   version: number;
   builderInput: unknown;
   notes: string[];

@@ -48,6 +48,7 @@ export async function getDutyCycle({
     rowsUsed: cycle.rowsUsed,
     rowsSkipped: cycle.rowsSkipped,
     attempts: cycle.attempts,
+    interruptions: cycle.interruptions,
     version: cycle.version,
     builderInput: cycle.builderInput,
     notes: summary?.notes ?? [],

@@ -4,33 +4,39 @@ import { Client } from "pg";
 import type { Db } from "@/db/client";
 import {
   IMPORT_JOB_OPTIONS,
-  IMPORT_QUEUE,
+  IMPORT_LIVENESS,
+  importQueue,
   IMPORT_WAKE_CHANNEL,
   type TImportJob,
 } from "@/features/duty-cycles/server/import-queue";
 import { runImport } from "@/features/duty-cycles/server/run-import";
 import { warmUpImport } from "@/features/duty-cycles/server/warm-up-import";
+import { recoverStalledImports } from "@/features/duty-cycles/server/recover-stalled-imports";
 
 /**
  * Works import jobs one at a time per worker (an import is CPU-bound; run more workers, on
- * other machines if need be, for more throughput). Returns a stop function.
+ * other machines if need be, for more throughput). Every worker also watches for imports whose
+ * worker died (a stale heartbeat) and queues them again. Returns a stop function.
  */
 export async function startImportWorker({
   db,
   connectionString,
   log = console.log,
+  liveness = IMPORT_LIVENESS,
 }: {
   db: Db;
   connectionString: string;
   log?: (message: string) => void;
+  /** How soon a dead worker's import is taken back (tests shorten it). */
+  liveness?: { staleAfterSeconds: number; checkSeconds: number };
 }): Promise<{ stop: () => Promise<void>; boss: PgBoss }> {
   await warmUpImport();
   const boss = new PgBoss({ connectionString, max: 3 });
   boss.on("error", (e) => console.error("[worker]", e));
   await boss.start();
-  await boss.createQueue(IMPORT_QUEUE, { name: IMPORT_QUEUE, ...IMPORT_JOB_OPTIONS });
+  await boss.createQueue(importQueue(), { name: importQueue(), ...IMPORT_JOB_OPTIONS });
   const workerId = await boss.work<TImportJob>(
-    IMPORT_QUEUE,
+    importQueue(),
     { batchSize: 1, pollingIntervalSeconds: 0.5 },
     async ([job]) => {
       if (!job) return;
@@ -49,9 +55,27 @@ export async function startImportWorker({
     },
   );
   const wake = await listenForNewJobs(connectionString, () => boss.notifyWorker(workerId));
+  const recover = async () => {
+    try {
+      const found = await recoverStalledImports({
+        db,
+        boss,
+        staleAfterSeconds: liveness.staleAfterSeconds,
+      });
+      for (const r of found)
+        log(
+          `[worker] duty cycle ${r.dutyCycleId}: its worker stopped mid-import; ${r.outcome === "retrying" ? "queued again" : "retry limit reached, marked failed"}`,
+        );
+    } catch (e) {
+      console.error("[worker] checking for stalled imports:", e instanceof Error ? e.message : e);
+    }
+  };
+  await recover();
+  const watchdog = setInterval(() => void recover(), liveness.checkSeconds * 1000);
   return {
     boss,
     stop: async () => {
+      clearInterval(watchdog);
       await wake.end().catch(() => undefined);
       await boss.stop({ graceful: true, wait: true, timeout: 10_000 });
     },

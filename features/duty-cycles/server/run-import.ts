@@ -1,7 +1,7 @@
 // Runs in the worker process (scripts/worker.ts), so no "server-only" marker.
 import { createReadStream } from "node:fs";
 import { open } from "node:fs/promises";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import type { Db, DbOrTx } from "@/db/client";
 import { dutyCycleImportErrors, dutyCycles, dutyCycleTurns, dutyCycleUploads } from "@/db/schema";
 import type { TColumnMapping } from "@/lib/duty-cycles/column-mapping";
@@ -14,11 +14,13 @@ import type { TStoredTurn } from "@/lib/duty-cycles/stored-duty-cycle";
 import { readCsvRows } from "@/features/duty-cycles/server/read-csv-rows";
 import { uploadPath } from "@/features/duty-cycles/server/upload-storage";
 import { insertTurns } from "@/features/duty-cycles/server/insert-turns";
+import { IMPORT_LIVENESS } from "@/features/duty-cycles/server/import-queue";
 
 const PROGRESS_EVERY_MS = 500;
 const INSERT_BATCH = 1000;
 
-export type TRunImportOutcome = "ready" | "failed" | "skipped";
+/** "superseded": this run was taken over (its worker was thought dead); it stored nothing. */
+export type TRunImportOutcome = "ready" | "failed" | "skipped" | "superseded";
 
 /** Replaces the turns, bad rows and totals of a cycle in one go (inside the caller's transaction). */
 async function replaceContents(
@@ -91,7 +93,9 @@ async function parseUpload(
 /**
  * Processes one uploaded duty cycle. Everything it stores is written in one transaction at the
  * end, after deleting what an earlier, interrupted attempt might have left, so running it twice
- * (a retry, or a restart after a crash) gives the same rows, never duplicates.
+ * (a retry, or a restart after a crash) gives the same rows, never duplicates. Each run owns the
+ * cycle through its attempt number and renews a heartbeat while it works; a run whose cycle was
+ * handed to another attempt (see recoverStalledImports) stores nothing.
  */
 export async function runImport({
   db,
@@ -110,17 +114,35 @@ export async function runImport({
     .select()
     .from(dutyCycleUploads)
     .where(eq(dutyCycleUploads.id, cycle.uploadId));
+  const attempt = cycle.attempts + 1;
+  const ours = and(eq(dutyCycles.id, dutyCycleId), eq(dutyCycles.attempts, attempt));
   await db
     .update(dutyCycles)
     .set({
       status: "processing",
       progress: 0,
       failureReason: null,
-      attempts: cycle.attempts + 1,
+      attempts: attempt,
       processingStartedAt: new Date(),
+      heartbeatAt: new Date(),
       updatedAt: new Date(),
     })
     .where(eq(dutyCycles.id, dutyCycleId));
+  const heartbeat = setInterval(() => {
+    db.update(dutyCycles)
+      .set({ heartbeatAt: new Date() })
+      .where(and(ours, eq(dutyCycles.status, "processing")))
+      .catch(() => undefined); // a missed beat only risks an early, harmless takeover
+  }, IMPORT_LIVENESS.heartbeatSeconds * 1000);
+  /** Locks the cycle; true while it is still this attempt's to finish. */
+  const stillOurs = async (tx: DbOrTx) => {
+    const [row] = await tx
+      .select({ status: dutyCycles.status, attempts: dutyCycles.attempts })
+      .from(dutyCycles)
+      .where(eq(dutyCycles.id, dutyCycleId))
+      .for("update");
+    return row?.status === "processing" && row.attempts === attempt;
+  };
 
   let progressWrite: Promise<unknown> = Promise.resolve();
   const onProgress = (share: number) => {
@@ -151,12 +173,8 @@ export async function runImport({
       rowsUsed: result.rowsUsed,
       rowsSkipped: result.rowsSkipped,
     });
-    await db.transaction(async (tx) => {
-      await tx
-        .select({ id: dutyCycles.id })
-        .from(dutyCycles)
-        .where(eq(dutyCycles.id, dutyCycleId))
-        .for("update");
+    const stored = await db.transaction(async (tx) => {
+      if (!(await stillOurs(tx))) return false;
       await replaceContents(tx, dutyCycleId, result.turns, result.errors, result.errorCount);
       await tx
         .update(dutyCycles)
@@ -169,11 +187,14 @@ export async function runImport({
           straight: result.straight,
           rowsUsed: result.rowsUsed,
           rowsSkipped: result.rowsSkipped,
+          heartbeatAt: null,
           processedAt: new Date(),
           updatedAt: new Date(),
         })
         .where(eq(dutyCycles.id, dutyCycleId));
+      return true;
     });
+    if (!stored) return "superseded";
     onTimings?.({
       parseMs: storeStarted - parseStarted,
       storeMs: performance.now() - storeStarted,
@@ -185,7 +206,8 @@ export async function runImport({
     const reason = failure
       ? failure.message
       : `Processing stopped: ${e instanceof Error ? e.message : String(e)}. Retry; if it fails again, check the file.`;
-    await db.transaction(async (tx) => {
+    const stored = await db.transaction(async (tx) => {
+      if (!(await stillOurs(tx))) return false;
       await replaceContents(tx, dutyCycleId, [], failure?.errors ?? [], failure?.errorCount ?? 0);
       await tx
         .update(dutyCycles)
@@ -196,13 +218,18 @@ export async function runImport({
           summary: null,
           rowsUsed: 0,
           rowsSkipped: failure?.errorCount ?? 0,
+          heartbeatAt: null,
           processedAt: new Date(),
           updatedAt: new Date(),
         })
         .where(eq(dutyCycles.id, dutyCycleId));
+      return true;
     });
+    if (!stored) return "superseded";
     // A bad file will not get better on its own; anything else is worth the queue's retry.
     if (!failure) throw e;
     return "failed";
+  } finally {
+    clearInterval(heartbeat);
   }
 }

@@ -64,8 +64,23 @@ export async function listMachines({
   const where = and(...filters);
   const order = query.dir === "desc" ? desc : asc;
   const shape = `machines:${query.sort}:${query.dir}:${query.template ?? "-"}:${shapeFlags(params)}`;
-  const rows = await preparedShape(db, shape, (name) =>
+  // Deferred join: the page's ids first, then the columns, the customer's name and the estimate
+  // count for those rows only, so deep pages stay cheap. The customer join stays in the id query
+  // because the list can sort by the customer's name.
+  const pageIds = () =>
     db
+      .select({ id: machines.id })
+      .from(machines)
+      .leftJoin(customers, eq(customers.id, machines.customerId))
+      .where(where)
+      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
+      .orderBy(order(sortColumns[query.sort]), order(machines.id))
+      .limit(bind("limit"))
+      .offset(bind("offset"))
+      .as("page_ids");
+  const rows = await preparedShape(db, shape, (name) => {
+    const page = pageIds();
+    return db
       .select({
         id: machines.id,
         customerId: machines.customerId,
@@ -78,15 +93,12 @@ export async function listMachines({
         estimateCount: sql<number>`(select count(*)::int from ${estimates} where ${estimates.machineId} = ${machines.id})`,
         total: totalColumn(machines, where),
       })
-      .from(machines)
+      .from(page)
+      .innerJoin(machines, eq(machines.id, page.id))
       .leftJoin(customers, eq(customers.id, machines.customerId))
-      .where(where)
-      // The id breaks ties in the same direction, so one index (…, column, id) serves the whole order.
       .orderBy(order(sortColumns[query.sort]), order(machines.id))
-      .limit(bind("limit"))
-      .offset(bind("offset"))
-      .prepare(name),
-  ).execute(params);
+      .prepare(name);
+  }).execute(params);
   const total = await pageTotal({ db, rows, shape, table: machines, where, params });
   return toPage(
     rows.map(({ total: _total, ...r }) => ({ ...r, updatedAt: iso(r.updatedAt) })),
