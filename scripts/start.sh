@@ -7,8 +7,10 @@ PGPORT="${PGPORT:-54329}"
 DB_NAME="treadcast"
 export SMTP_PORT="${SMTP_PORT:-2525}"
 export STRIPE_FAKE_PORT="${STRIPE_FAKE_PORT:-12111}"
+export STRIPE_API_BASE="http://127.0.0.1:$STRIPE_FAKE_PORT"
 
 port_busy "$APP_PORT" && fail "port $APP_PORT is already in use (is Treadcast already running?). Stop that process or run PORT=3001 npm start."
+port_busy "$STRIPE_FAKE_PORT" && fail "port $STRIPE_FAKE_PORT (payments fake) is already in use. Stop that process or set STRIPE_FAKE_PORT."
 port_busy "$SMTP_PORT" && fail "port $SMTP_PORT (mail fake) is already in use. Stop that process or set SMTP_PORT."
 
 ensure_node_modules
@@ -52,7 +54,7 @@ PIDS+=($!)
 
 if [ -f scripts/worker.ts ]; then
   log "starting background worker"
-  node_modules/.bin/tsx scripts/worker.ts &
+  node --conditions=react-server --import tsx scripts/worker.ts &
   PIDS+=($!)
 fi
 
