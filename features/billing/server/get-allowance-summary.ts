@@ -15,6 +15,7 @@ import { BILLING_HREF } from "@/features/billing/server/allowance-error";
 import { countUsedInPeriod } from "@/features/billing/server/count-used-in-period";
 
 export type TAllowanceSummary = {
+  planKey: string | null;
   planName: string | null;
   planKind: "trial" | "pack" | "monthly" | "annual" | null;
   state: TBillingStatus;
@@ -77,6 +78,7 @@ export async function getAllowanceSummary({
     now,
   });
   return {
+    planKey: plan?.key ?? null,
     planName: plan?.name ?? null,
     planKind: plan?.kind ?? null,
     state: status,
