@@ -41,6 +41,15 @@ const ZEnv = z.object({
     .int()
     .positive()
     .default(200 * 1024 * 1024),
+  /** Payments: the Stripe secret key; the local fake accepts any sk_test_ key. */
+  STRIPE_SECRET_KEY: z.string().default("sk_test_treadcast_local_fake"),
+  /**
+   * Where the Stripe API lives. Unset means the real service; `npm start` and `npm test` point it
+   * at the local fake (http://127.0.0.1:STRIPE_FAKE_PORT).
+   */
+  STRIPE_API_BASE: z.preprocess((v) => (v === "" ? undefined : v), z.string().url().optional()),
+  STRIPE_WEBHOOK_SECRET: z.string().min(8).default("whsec_treadcast_local_fake_secret"),
+  STRIPE_FAKE_PORT: z.coerce.number().int().positive().default(12111),
   APP_VERSION: z.string().default(process.env.npm_package_version ?? "0.1.0"),
 });
 

@@ -4,8 +4,11 @@ import { seedTenancy } from "@/scripts/seed/tenancy";
 import { seedAccounts } from "@/scripts/seed/accounts";
 import { seedWorkspace } from "@/scripts/seed/workspace";
 import { seedDutyCycles } from "@/scripts/seed/duty-cycles";
+import { seedBilling, seedBillingPlans } from "@/scripts/seed/billing";
 
 const db = getDb();
+// Plans first: a new dealership starts its trial from them.
+await seedBillingPlans(db);
 const tenancy = await seedTenancy(db);
 console.log(`[seed] dealership "${tenancy.dealership.name}" ready`);
 const accounts = await seedAccounts(db, { customers: tenancy.customers });
@@ -19,4 +22,9 @@ const workspace = await seedWorkspace(db, {
 console.log(
   `[seed] workspace: ${workspace.machines} demo machines, ${workspace.templates} templates, ${workspace.estimatesAdded} new estimates`,
 );
+const plans = await seedBilling(db, {
+  dealerships: [tenancy.dealership, tenancy.rival],
+  billingEmail: "billing@brackenridge.test",
+});
+console.log(`[seed] billing: ${plans} plans, trial accounts ready`);
 await getPool().end();

@@ -8,8 +8,10 @@ PGPORT="${PGPORT:-54329}"
 DB_NAME="treadcast"
 export SMTP_PORT="${SMTP_PORT:-2525}"
 export STRIPE_FAKE_PORT="${STRIPE_FAKE_PORT:-12111}"
+export STRIPE_API_BASE="http://127.0.0.1:$STRIPE_FAKE_PORT"
 
 port_busy "$APP_PORT" && fail "port $APP_PORT is already in use (is Treadcast already running?). Stop that process or run PORT=3001 npm start."
+port_busy "$STRIPE_FAKE_PORT" && fail "port $STRIPE_FAKE_PORT (payments fake) is already in use. Stop that process or set STRIPE_FAKE_PORT."
 port_busy "$SMTP_PORT" && fail "port $SMTP_PORT (mail fake) is already in use. Stop that process or set SMTP_PORT."
 
 ensure_node_modules
@@ -56,7 +58,7 @@ fi
 # its pid is the one a kill (or the kernel's out-of-memory killer) reaches.
 log "starting local fakes (mail, payments), the background worker and the app"
 supervise fakes node --import tsx mocks/run-fakes.ts
-supervise worker node --import tsx scripts/worker.ts
+supervise worker node --conditions=react-server --import tsx scripts/worker.ts
 supervise app node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$APP_PORT"
 
 for _ in $(seq 1 100); do port_busy "$APP_PORT" && break; sleep 0.2; done

@@ -9,6 +9,7 @@ export NEXT_TELEMETRY_DISABLED=1
 export E2E_PORT="${E2E_PORT:-3100}"
 export SMTP_PORT="${TEST_SMTP_PORT:-2526}"
 export STRIPE_FAKE_PORT="${TEST_STRIPE_FAKE_PORT:-12112}"
+export STRIPE_API_BASE="http://127.0.0.1:$STRIPE_FAKE_PORT"
 export NEXT_DIST_DIR=".next-test"
 
 ensure_node_modules

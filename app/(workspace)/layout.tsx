@@ -4,7 +4,7 @@ import { getActor } from "@/features/auth/server/get-actor";
 import { authNavItems } from "@/features/auth/nav";
 import { UserMenu } from "@/features/auth/components/user-menu";
 import { GlobalSearch } from "@/features/search/components/global-search";
-import { isStaff } from "@/lib/authz/policy";
+import { can, isStaff } from "@/lib/authz/policy";
 import { AppShell, type NavItem } from "@/lib/ui/app-shell";
 
 /** Everything a signed-in member works in: navigation, search and the user menu. */
@@ -19,6 +19,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
     { href: "/machines", label: "Machines" },
     { href: "/duty-cycles", label: "Duty cycles" },
     { href: "/estimates", label: "Estimates" },
+    ...(can(actor, "billing:read") ? [{ href: "/billing", label: "Report plan" }] : []),
     ...authNavItems(actor),
   ];
   return (

@@ -20,6 +20,7 @@ export const ACTIONS = [
   "report:share",
   "staff:manage",
   "billing:manage",
+  "billing:read",
   "audit:read",
   "mapping-template:write",
   "account:manage",
@@ -60,9 +61,12 @@ export const ROLE_GRANTS: Record<TRole, ReadonlySet<TAction>> = {
     ...WORKSPACE_WRITES,
     "staff:manage",
     "audit:read",
+    "billing:manage",
+    "billing:read",
   ]),
-  estimator: new Set([...SELF, ...STAFF_READS, ...WORKSPACE_WRITES]),
-  billing_admin: new Set([...SELF, ...STAFF_READS, "billing:manage"]),
+  // Estimators see the report counter (and why issuing is blocked), not the plan's controls.
+  estimator: new Set([...SELF, ...STAFF_READS, ...WORKSPACE_WRITES, "billing:read"]),
+  billing_admin: new Set([...SELF, ...STAFF_READS, "billing:manage", "billing:read"]),
   customer: new Set([...SELF, ...CUSTOMER_READS]),
 };
 

@@ -266,6 +266,11 @@ function forbiddenMarkers(caller: TCallerName): string[] {
 type TRouteFixture = {
   /** Public by design (health, Auth.js endpoints): not checked for 401. */
   public?: true;
+  /**
+   * Public, but the caller proves itself with a signature over the body (payment webhooks):
+   * every caller without a valid signature must get 400 and see nothing.
+   */
+  signed?: true;
   /** Values for the dynamic segments; defaults cover `[id]` after a known collection. */
   params?: (w: TWorld) => Record<string, string | string[]>;
   query?: string;
@@ -278,6 +283,7 @@ type TRouteFixture = {
 /** Per-route fixtures, keyed by the route's path pattern. */
 const ROUTE_FIXTURES: Record<string, TRouteFixture> = {
   "/api/health": { public: true },
+  "/api/v1/billing/webhook": { public: true, signed: true },
   "/api/auth/[...nextauth]": { public: true, params: () => ({ nextauth: ["session"] }) },
   "/api/v1/sites": {
     body: (w) => ({
@@ -479,6 +485,42 @@ const ACTION_FIXTURES: Record<string, TActionFixture> = {
     ],
     allowed: ["dealer_admin"],
   },
+  "app/(workspace)/billing/actions.ts#startCheckoutAction": {
+    args: () => [undefined, form({ planKey: "tc-yard-monthly" })],
+    allowed: ["dealer_admin", "billing_admin"],
+    // Acts only on the caller's own dealership (no ids in the input), so a rival may too.
+    selfOnly: true,
+  },
+  "app/(workspace)/billing/actions.ts#openPortalAction": {
+    args: () => [undefined],
+    allowed: ["dealer_admin", "billing_admin"],
+    // Acts only on the caller's own dealership (no ids in the input), so a rival may too.
+    selfOnly: true,
+  },
+  "app/(workspace)/billing/actions.ts#switchPlanAction": {
+    args: () => [undefined, form({ planKey: "tc-yard-annual" })],
+    allowed: ["dealer_admin", "billing_admin"],
+    // Acts only on the caller's own dealership (no ids in the input), so a rival may too.
+    selfOnly: true,
+  },
+  "app/(workspace)/billing/actions.ts#cancelPlanAction": {
+    args: () => [undefined, new FormData()],
+    allowed: ["dealer_admin", "billing_admin"],
+    // Acts only on the caller's own dealership (no ids in the input), so a rival may too.
+    selfOnly: true,
+  },
+  "app/(workspace)/billing/actions.ts#resumePlanAction": {
+    args: () => [undefined, new FormData()],
+    allowed: ["dealer_admin", "billing_admin"],
+    // Acts only on the caller's own dealership (no ids in the input), so a rival may too.
+    selfOnly: true,
+  },
+  "app/(workspace)/billing/actions.ts#setBillingEmailAction": {
+    args: () => [undefined, form({ email: "accounts@home.example.test" })],
+    allowed: ["dealer_admin", "billing_admin"],
+    // Acts only on the caller's own dealership (no ids in the input), so a rival may too.
+    selfOnly: true,
+  },
   "features/auth/server/actions/team-actions.ts#removeMemberAction": {
     args: (w) => [undefined, form({ userId: w.members.estimator.user.id })],
     allowed: ["dealer_admin"],
@@ -547,8 +589,10 @@ describe("authorization matrix: route handlers", () => {
     const mod = (await import(pathToFileURL(route.file).href)) as Record<string, unknown>;
     // Public routes are only read, to check they reveal nothing about other dealerships.
     const isPublic = ROUTE_FIXTURES[route.pattern]?.public;
+    const isSigned = ROUTE_FIXTURES[route.pattern]?.signed;
     const methods = METHODS.filter(
-      (m) => typeof mod[m] === "function" && (!isPublic || m === "GET"),
+      (m) =>
+        typeof mod[m] === "function" && (!isPublic || m === "GET" || (isSigned && m === "POST")),
     );
     expect(methods.length, `${route.pattern} exports no HTTP method`).toBeGreaterThan(0);
     const callers: TCallerName[] = [
@@ -564,6 +608,17 @@ describe("authorization matrix: route handlers", () => {
       const handler = mod[method] as (req: Request, ctx: unknown) => Promise<Response>;
       for (const caller of callers) {
         const denied = mustBeDenied(route, method, caller);
+        if (isSigned) {
+          // No caller holds the signing secret, so every one must be turned away with 400.
+          const out = await callRoute(route, handler, method, caller);
+          if (out.status !== 400)
+            problems.push(
+              `${method} as ${caller} without a signature: expected 400, got ${out.status}`,
+            );
+          const leaked = leaks(out.body, caller);
+          if (leaked.length) problems.push(`${method} as ${caller} leaked: ${leaked.join(", ")}`);
+          continue;
+        }
         // Allowed writes are not exercised: this test proves refusals and the absence of leaks.
         if (!denied && MUTATING.has(method)) continue;
         const out = await callRoute(route, handler, method, caller);

@@ -34,7 +34,10 @@ export default async function setup() {
   };
   const children: ChildProcess[] = [
     spawn("node_modules/.bin/tsx", ["mocks/run-fakes.ts"], { env, stdio: "inherit" }),
-    spawn("node_modules/.bin/tsx", ["scripts/worker.ts"], { env, stdio: "inherit" }),
+    spawn("node", ["--conditions=react-server", "--import", "tsx", "scripts/worker.ts"], {
+      env,
+      stdio: "inherit",
+    }),
     spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", port], {
       env,
       stdio: "inherit",

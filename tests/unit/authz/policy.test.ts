@@ -39,11 +39,22 @@ const WRITES: TAction[] = [
   "mapping-template:write",
 ];
 
-/** Expected grants per role, written out independently of the policy's own tables. */
+/**
+ * Expected grants per role, written out independently of the policy's own tables. Billing: the
+ * billing issue gives plan controls to billing and dealer admins, the counter to every staff role.
+ */
 const EXPECTED: Record<TRole, TAction[]> = {
-  dealer_admin: [...READS, ...WRITES, "staff:manage", "audit:read", "account:manage"],
-  estimator: [...READS, ...WRITES, "account:manage"],
-  billing_admin: [...READS, "billing:manage", "account:manage"],
+  dealer_admin: [
+    ...READS,
+    ...WRITES,
+    "staff:manage",
+    "audit:read",
+    "account:manage",
+    "billing:manage",
+    "billing:read",
+  ],
+  estimator: [...READS, ...WRITES, "account:manage", "billing:read"],
+  billing_admin: [...READS, "billing:manage", "billing:read", "account:manage"],
   customer: [...READS, "account:manage"],
 };
 
