@@ -4,6 +4,7 @@ import { seedTenancy } from "@/scripts/seed/tenancy";
 import { seedAccounts } from "@/scripts/seed/accounts";
 import { seedWorkspace } from "@/scripts/seed/workspace";
 import { seedDutyCycles } from "@/scripts/seed/duty-cycles";
+import { seedReportBranding } from "@/scripts/seed/reports";
 
 const db = getDb();
 const tenancy = await seedTenancy(db);
@@ -19,4 +20,6 @@ const workspace = await seedWorkspace(db, {
 console.log(
   `[seed] workspace: ${workspace.machines} demo machines, ${workspace.templates} templates, ${workspace.estimatesAdded} new estimates`,
 );
+await seedReportBranding(db, [tenancy.dealership, tenancy.rival]);
+console.log("[seed] report branding ready");
 await getPool().end();

@@ -240,6 +240,8 @@ export function ReportDocument({
             ) : null}
           </View>
           {logo ? (
+            // react-pdf's Image has no alt; the dealership name is printed beside it.
+            // eslint-disable-next-line jsx-a11y/alt-text
             <Image src={logo} style={{ maxWidth: 160, maxHeight: 60, objectFit: "contain" }} />
           ) : null}
         </View>

@@ -4,6 +4,7 @@ import { getActor } from "@/features/auth/server/get-actor";
 import { EstimateResult } from "@/features/workspace/components/estimate-result";
 import { isUuid, prefetch } from "@/features/workspace/server/prefetch";
 import { can } from "@/lib/authz/policy";
+import { CreateReportButton } from "@/features/reports/components/create-report-button";
 import { makeQueryClient } from "@/lib/query/query-client";
 
 export const metadata = { title: "Estimate" };
@@ -16,6 +17,11 @@ export default async function EstimatePage({ params }: { params: Promise<{ id: s
   if (!isUuid(id) || !(await prefetch.estimate(qc, actor, id))) notFound();
   return (
     <HydrationBoundary state={dehydrate(qc)}>
+      {can(actor, "report:share") ? (
+        <div className="mb-4 flex justify-end">
+          <CreateReportButton estimateId={id} />
+        </div>
+      ) : null}
       <EstimateResult id={id} system={actor.unitSystem} canWrite={can(actor, "estimate:write")} />
     </HydrationBoundary>
   );
