@@ -1,4 +1,3 @@
-import "server-only";
 import {
   Document,
   Image,
@@ -68,7 +67,7 @@ const s = StyleSheet.create({
 function Table({ widths, head, rows }: { widths: number[]; head: string[]; rows: string[][] }) {
   return (
     <View>
-      <View style={s.row} fixed>
+      <View style={s.row}>
         {head.map((h, i) => (
           <Text key={i} style={[s.th, { width: `${widths[i]}%` }]}>
             {h}

@@ -3,7 +3,7 @@ import type { DbOrTx } from "@/db/client";
 import type { TActor } from "@/lib/authz/actor";
 import { reportFileName, type TReportContent } from "@/lib/reports";
 import { loadReportVersion, recordOpen } from "@/features/reports/server/get-report-version";
-import { renderReportPdf } from "@/features/reports/server/render-report-pdf";
+import { renderReportPdf } from "@/features/reports/pdf/render-report-pdf";
 
 /** The PDF of one issued version with the file name to offer (customer, machine, version). */
 export async function exportReportPdf({

@@ -1,4 +1,3 @@
-import "server-only";
 import { createElement, type ReactElement } from "react";
 import { renderToBuffer, type DocumentProps } from "@react-pdf/renderer";
 import type { TReportContent } from "@/lib/reports";
