@@ -3,6 +3,8 @@ import { and, asc, desc, eq, ilike, or, type SQL } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { customers, estimates } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
+import { can } from "@/lib/authz/policy";
+import { WorkspaceError } from "@/features/workspace/server/errors";
 import type { TEstimateListQuery, TPage } from "@/features/workspace/schemas/list-query";
 import type { TEstimateRow } from "@/features/workspace/schemas/estimate";
 import { customerScope } from "@/features/workspace/server/authorize";
@@ -36,6 +38,12 @@ export async function listEstimates({
   actor: TActor;
   query: TEstimateListQuery;
 }): Promise<TPage<TEstimateRow>> {
+  if (!can(actor, "estimate:read"))
+    throw new WorkspaceError(
+      403,
+      "forbidden",
+      "Estimates are your dealer's working material; the reports they share with you are under Reports.",
+    );
   const params: Record<string, unknown> = {
     dealershipId: actor.dealershipId,
     ...pageWindow(query.page, query.pageSize),
