@@ -10,7 +10,16 @@ import { EstimatesTable } from "@/features/workspace/components/estimates-table"
 import { DeleteButton } from "@/features/workspace/components/delete-button";
 
 /** One customer: details (editable by staff), sites, machines and estimates. */
-export function CustomerDetail({ id, canWrite }: { id: string; canWrite: boolean }) {
+export function CustomerDetail({
+  id,
+  canWrite,
+  canReadEstimates = true,
+}: {
+  id: string;
+  canWrite: boolean;
+  /** False for a customer account: estimates are the dealer's drafts. */
+  canReadEstimates?: boolean;
+}) {
   const customer = useCustomer(id);
   const remove = useDeleteCustomer();
   if (customer.isPending) return <p className="text-ink-600">Loading customer…</p>;
@@ -88,9 +97,11 @@ export function CustomerDetail({ id, canWrite }: { id: string; canWrite: boolean
       <Card title="Machines">
         <MachinesTable canWrite={canWrite} customerId={c.id} />
       </Card>
-      <Card title="Estimates">
-        <EstimatesTable canRun={canWrite} customerId={c.id} pageSize={10} />
-      </Card>
+      {canReadEstimates ? (
+        <Card title="Estimates">
+          <EstimatesTable canRun={canWrite} customerId={c.id} pageSize={10} />
+        </Card>
+      ) : null}
     </div>
   );
 }

@@ -16,12 +16,15 @@ export function MachineDetail({
   system,
   canWrite,
   canRun,
+  canReadEstimates = true,
 }: {
   id: string;
   customers: { id: string; name: string }[];
   system: TUnitSystem;
   canWrite: boolean;
   canRun: boolean;
+  /** False for a customer account: estimates are the dealer's drafts. */
+  canReadEstimates?: boolean;
 }) {
   const machine = useMachine(id);
   const remove = useDeleteMachine();
@@ -78,9 +81,11 @@ export function MachineDetail({
         system={system}
         readOnly={!canWrite}
       />
-      <Card title="Estimates for this machine">
-        <EstimatesTable canRun={canRun} machineId={m.id} pageSize={10} />
-      </Card>
+      {canReadEstimates ? (
+        <Card title="Estimates for this machine">
+          <EstimatesTable canRun={canRun} machineId={m.id} pageSize={10} />
+        </Card>
+      ) : null}
     </div>
   );
 }

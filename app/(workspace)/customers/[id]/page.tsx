@@ -16,7 +16,11 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
   if (!isUuid(id) || !(await prefetch.customer(qc, actor, id))) notFound();
   return (
     <HydrationBoundary state={dehydrate(qc)}>
-      <CustomerDetail id={id} canWrite={can(actor, "customer:write")} />
+      <CustomerDetail
+        id={id}
+        canWrite={can(actor, "customer:write")}
+        canReadEstimates={can(actor, "estimate:read")}
+      />
     </HydrationBoundary>
   );
 }

@@ -25,6 +25,7 @@ export default async function MachinePage({ params }: { params: Promise<{ id: st
         system={actor.unitSystem}
         canWrite={can(actor, "machine:write")}
         canRun={can(actor, "estimate:run")}
+        canReadEstimates={can(actor, "estimate:read")}
       />
     </HydrationBoundary>
   );
