@@ -6,7 +6,7 @@ import {
   useQueryClient,
 } from "@tanstack/react-query";
 import { apiFetch, toQueryString } from "@/lib/query/api-fetch";
-import type { TPage } from "@/features/workspace/schemas/list-query";
+import type { TPage } from "@/lib/query/list-query";
 import type {
   TBrandingDto,
   TBrandingPatch,

@@ -5,8 +5,8 @@ import type { TActor } from "@/lib/authz/actor";
 import { ZReportCreate, type TReportDto } from "@/features/reports/schemas/report";
 import { assertMayPrepareReports } from "@/features/reports/server/report-access";
 import { toReportDto } from "@/features/reports/server/report-dto";
-import { invalidReference, parseOrThrow, WorkspaceError } from "@/features/workspace/server/errors";
-import { loadEstimate } from "@/features/workspace/server/get-estimate";
+import { invalidReference, parseOrThrow, ApiError } from "@/features/platform";
+import { loadEstimate } from "@/features/estimates";
 
 /** Starts a draft quote report from a stored estimate (the one-option case of a comparison). */
 export async function createReport({
@@ -24,7 +24,7 @@ export async function createReport({
   try {
     row = await loadEstimate(db, actor, values.estimateId, "read");
   } catch (e) {
-    if (e instanceof WorkspaceError && e.status === 404)
+    if (e instanceof ApiError && e.status === 404)
       throw invalidReference("estimateId", "No estimate with that id in your workspace.");
     throw e;
   }

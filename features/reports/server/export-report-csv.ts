@@ -4,7 +4,7 @@ import type { DbOrTx } from "@/db/client";
 import type { TActor } from "@/lib/authz/actor";
 import { reportFileName, type TReportContent } from "@/lib/reports";
 import { loadReportVersion } from "@/features/reports/server/get-report-version";
-import { estimateTurnsCsv } from "@/features/workspace/lib/estimate-csv";
+import { estimateTurnsCsv } from "@/features/estimates";
 
 /**
  * The per-turn CSV annex of an issued version: the estimate's per-turn, per-wheel table (SI units)

@@ -3,7 +3,7 @@ import { eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { dealershipBrandings } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
-import { notFound } from "@/features/workspace/server/errors";
+import { notFound } from "@/features/platform";
 
 /** The dealership's current logo (re-encoded PNG), for the branding page. */
 export async function getLogo({ db, actor }: { db: DbOrTx; actor: TActor }) {

@@ -7,14 +7,14 @@ import { isStaff } from "@/lib/authz/policy";
 import type { TReportVersionDto } from "@/features/reports/schemas/report";
 import { loadReport } from "@/features/reports/server/report-access";
 import { toVersionDto } from "@/features/reports/server/version-dto";
-import { notFound, WorkspaceError } from "@/features/workspace/server/errors";
+import { notFound, ApiError } from "@/features/platform";
 
 /** "latest" or a version number from the path. */
 export function versionParam(value: string | undefined): number | "latest" {
   if (value === "latest") return "latest";
   const n = Number(value);
   if (!Number.isInteger(n) || n < 1 || n > 100_000)
-    throw new WorkspaceError(404, "not_found", "No report version with that number.");
+    throw new ApiError(404, "not_found", "No report version with that number.");
   return n;
 }
 

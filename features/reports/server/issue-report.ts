@@ -10,7 +10,7 @@ import type { TReportVersionDto } from "@/features/reports/schemas/report";
 import { assertMayPrepareReports, loadReport } from "@/features/reports/server/report-access";
 import { loadBranding } from "@/features/reports/server/get-branding";
 import { toVersionDto } from "@/features/reports/server/version-dto";
-import { WorkspaceError } from "@/features/workspace/server/errors";
+import { ApiError } from "@/features/platform";
 
 type TEstimateInputs = { machine: TMachineInput; dutyCycle: TDutyCycleInput };
 
@@ -35,7 +35,7 @@ export async function issueReport({
       // The row lock serialises two issues of the same report: versions stay 1, 2, 3...
       const report = await loadReport(tx, actor, id, "write", { lock: true });
       if (!report.estimateId)
-        throw new WorkspaceError(
+        throw new ApiError(
           409,
           "source_missing",
           "The estimate this report was built from has been deleted: start a new report from a current estimate.",
@@ -47,8 +47,7 @@ export async function issueReport({
         .where(
           and(eq(estimates.id, report.estimateId), eq(estimates.dealershipId, actor.dealershipId)),
         );
-      if (!source)
-        throw new WorkspaceError(409, "source_missing", "The report's estimate is gone.");
+      if (!source) throw new ApiError(409, "source_missing", "The report's estimate is gone.");
       const { dealershipName, branding } = await loadBranding(tx, actor.dealershipId);
       const [issuer] = await tx
         .select({ name: users.name })
@@ -112,7 +111,7 @@ export async function issueReport({
     });
   } catch (e) {
     if (e instanceof ReportAllowanceError)
-      throw new WorkspaceError(402, e.code, e.message, undefined, { billingHref: e.billingHref });
+      throw new ApiError(402, e.code, e.message, undefined, { billingHref: e.billingHref });
     throw e;
   }
 }

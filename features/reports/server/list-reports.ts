@@ -4,14 +4,14 @@ import type { DbOrTx } from "@/db/client";
 import type { TActor } from "@/lib/authz/actor";
 import { can, readScope } from "@/lib/authz/policy";
 import type { TReportStatus } from "@/lib/reports";
-import type { TPage } from "@/features/workspace/schemas/list-query";
+import type { TPage } from "@/lib/query/list-query";
 import {
   ZReportListQuery,
   type TReportListQuery,
   type TReportRow,
 } from "@/features/reports/schemas/report";
-import { forbidden, parseOrThrow } from "@/features/workspace/server/errors";
-import { likePattern, toPage } from "@/features/workspace/server/paging";
+import { forbidden, parseOrThrow } from "@/features/platform";
+import { likePattern, toPage } from "@/features/platform";
 
 type TRaw = {
   report_id: string;

@@ -5,11 +5,11 @@ import { reportMessages, reportShares, users } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
 import { can, isStaff } from "@/lib/authz/policy";
 import { getEnv } from "@/lib/env";
-import type { TMailer } from "@/features/auth/server/mailer";
+import type { TMailer } from "@/features/auth";
 import { ZReportMessage, type TReportMessageDto } from "@/features/reports/schemas/report";
 import { loadReport } from "@/features/reports/server/report-access";
 import { reportMessageMail } from "@/features/reports/server/report-mails";
-import { forbidden, parseOrThrow } from "@/features/workspace/server/errors";
+import { forbidden, parseOrThrow } from "@/features/platform";
 
 /**
  * Adds a message to a report's thread. A customer's question is e-mailed to the estimator who

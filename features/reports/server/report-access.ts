@@ -4,7 +4,7 @@ import type { DbOrTx } from "@/db/client";
 import { reports, reportShares, type TReport } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
 import { can, isStaff } from "@/lib/authz/policy";
-import { forbidden, notFound } from "@/features/workspace/server/errors";
+import { forbidden, notFound } from "@/features/platform";
 
 /** Has this issued report a live share with its customer? */
 export async function isShared(db: DbOrTx, reportId: string): Promise<boolean> {

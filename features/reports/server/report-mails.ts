@@ -1,5 +1,5 @@
 import "server-only";
-import type { TMail } from "@/features/auth/server/mailer";
+import type { TMail } from "@/features/auth";
 
 const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 

@@ -4,13 +4,13 @@ import type { Db } from "@/db/client";
 import { customers, dealerships, invitations, memberships, reportShares, users } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
 import { getEnv } from "@/lib/env";
-import type { TMailer } from "@/features/auth/server/mailer";
-import { issueInvitation } from "@/features/auth/server/invite-member";
+import type { TMailer } from "@/features/auth";
+import { issueInvitation } from "@/features/auth";
 import { ZReportShare, type TReportDto } from "@/features/reports/schemas/report";
 import { assertMayPrepareReports, loadReport } from "@/features/reports/server/report-access";
 import { getReport } from "@/features/reports/server/get-report";
 import { reportInvitationMail, reportSharedMail } from "@/features/reports/server/report-mails";
-import { invalidReference, parseOrThrow, WorkspaceError } from "@/features/workspace/server/errors";
+import { invalidReference, parseOrThrow, ApiError } from "@/features/platform";
 
 /**
  * Shares an issued report with its customer: every customer account of that customer record is
@@ -34,7 +34,7 @@ export async function shareReport({
   const report = await loadReport(db, actor, id, "write");
   const values = parseOrThrow(ZReportShare, input);
   if (report.latestVersion === 0)
-    throw new WorkspaceError(409, "not_issued", "Issue the report before sharing it.");
+    throw new ApiError(409, "not_issued", "Issue the report before sharing it.");
   const appUrl = getEnv().APP_URL;
   const [dealership] = await db
     .select({ name: dealerships.name })

@@ -5,7 +5,7 @@ import type { TActor } from "@/lib/authz/actor";
 import { can } from "@/lib/authz/policy";
 import { ZBrandingPatch, type TBrandingDto } from "@/features/reports/schemas/report";
 import { getBranding } from "@/features/reports/server/get-branding";
-import { forbidden, parseOrThrow } from "@/features/workspace/server/errors";
+import { forbidden, parseOrThrow } from "@/features/platform";
 
 /** The dealer admin sets the name, contact line and currency printed on new reports. */
 export async function updateBranding({

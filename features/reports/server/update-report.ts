@@ -6,7 +6,7 @@ import type { TActor } from "@/lib/authz/actor";
 import { ZReportDraftPatch, type TReportDto } from "@/features/reports/schemas/report";
 import { assertMayPrepareReports, loadReport } from "@/features/reports/server/report-access";
 import { getReport } from "@/features/reports/server/get-report";
-import { parseOrThrow } from "@/features/workspace/server/errors";
+import { parseOrThrow } from "@/features/platform";
 
 /** Edits the draft fields; issued versions keep what they were issued with. */
 export async function updateReport({

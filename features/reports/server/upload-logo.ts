@@ -6,7 +6,7 @@ import type { TActor } from "@/lib/authz/actor";
 import { can } from "@/lib/authz/policy";
 import type { TBrandingDto } from "@/features/reports/schemas/report";
 import { getBranding } from "@/features/reports/server/get-branding";
-import { forbidden, WorkspaceError } from "@/features/workspace/server/errors";
+import { forbidden, ApiError } from "@/features/platform";
 
 export const LOGO_MAX_BYTES = 2 * 1024 * 1024;
 const LOGO_MAX_BOX = { width: 800, height: 320 };
@@ -20,7 +20,7 @@ export function sniffImage(bytes: Uint8Array): "png" | "jpeg" | null {
   return null;
 }
 
-const refuse = (message: string) => new WorkspaceError(400, "invalid_logo", message);
+const refuse = (message: string) => new ApiError(400, "invalid_logo", message);
 
 /**
  * Stores the dealership's logo: PNG or JPEG only (checked by content), at most 2 MB, decoded and

@@ -36,7 +36,7 @@ import {
   makeDealership,
   testTractorSpec,
   BASE,
-} from "../workspace/support";
+} from "@/tests/support/records";
 
 let team: Awaited<ReturnType<typeof makeDealership>>;
 let customerId: string;

@@ -5,7 +5,7 @@ import { reportTitleFor } from "@/features/reports/server/report-page-access";
 import { ReportWorkbench } from "@/features/reports/components/report-workbench";
 import { ReportView } from "@/features/reports/components/report-view";
 import { ReportThread } from "@/features/reports/components/report-thread";
-import { isUuid } from "@/features/workspace/server/prefetch";
+import { isUuid } from "@/features/platform";
 import { can, isStaff } from "@/lib/authz/policy";
 
 export const metadata = { title: "Report" };

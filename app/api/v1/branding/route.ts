@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { readJson, respond } from "@/features/workspace/server/respond";
+import { readJson, respond } from "@/features/platform";
 import { getBranding } from "@/features/reports/server/get-branding";
 import { updateBranding } from "@/features/reports/server/update-branding";
 

@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { queryOf, readJson, respond } from "@/features/workspace/server/respond";
+import { queryOf, readJson, respond } from "@/features/platform";
 import { createReport } from "@/features/reports/server/create-report";
 import { listReports } from "@/features/reports/server/list-reports";
 

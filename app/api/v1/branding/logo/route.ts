@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { respond } from "@/features/workspace/server/respond";
+import { respond } from "@/features/platform";
 import { getLogo } from "@/features/reports/server/get-logo";
 import { uploadLogo } from "@/features/reports/server/upload-logo";
 

@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, readJson, respond } from "@/features/workspace/server/respond";
+import { pathId, readJson, respond } from "@/features/platform";
 import { getReport } from "@/features/reports/server/get-report";
 import { updateReport } from "@/features/reports/server/update-report";
 

@@ -4,7 +4,7 @@ import { getDb } from "@/db/client";
 import { getActor } from "@/features/auth/server/get-actor";
 import { reportTitleFor } from "@/features/reports/server/report-page-access";
 import { ReportView } from "@/features/reports/components/report-view";
-import { isUuid } from "@/features/workspace/server/prefetch";
+import { isUuid } from "@/features/platform";
 
 export const metadata = { title: "Report version" };
 

@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, respond } from "@/features/workspace/server/respond";
+import { pathId, respond } from "@/features/platform";
 import { issueReport } from "@/features/reports/server/issue-report";
 
 /** Issues the next immutable version (402 when the dealership's report allowance refuses). */

@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, readJson, respond } from "@/features/workspace/server/respond";
+import { pathId, readJson, respond } from "@/features/platform";
 import { getMailer } from "@/features/auth/server/mailer";
 import { listReportMessages } from "@/features/reports/server/list-report-messages";
 import { postReportMessage } from "@/features/reports/server/post-report-message";

@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, readJson, respond } from "@/features/workspace/server/respond";
+import { pathId, readJson, respond } from "@/features/platform";
 import { getMailer } from "@/features/auth/server/mailer";
 import { shareReport } from "@/features/reports/server/share-report";
 import { withdrawReportShare } from "@/features/reports/server/withdraw-report-share";

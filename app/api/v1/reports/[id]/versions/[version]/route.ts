@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, respond } from "@/features/workspace/server/respond";
+import { pathId, respond } from "@/features/platform";
 import { getReportVersion, versionParam } from "@/features/reports/server/get-report-version";
 
 /** One issued version as frozen ("latest" for the newest). */

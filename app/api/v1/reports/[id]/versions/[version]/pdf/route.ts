@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, respond } from "@/features/workspace/server/respond";
+import { pathId, respond } from "@/features/platform";
 import { versionParam } from "@/features/reports/server/get-report-version";
 import { exportReportPdf } from "@/features/reports/server/export-report-pdf";
 import { attachment } from "@/features/reports/server/attachment";
