@@ -4,3 +4,4 @@ export * from "@/db/tables/workspace";
 export * from "@/db/tables/duty-cycles";
 export * from "@/db/tables/accounts";
 export * from "@/db/tables/billing";
+export * from "@/db/tables/reports";

@@ -5,6 +5,7 @@ import { seedAccounts } from "@/scripts/seed/accounts";
 import { seedWorkspace } from "@/scripts/seed/workspace";
 import { seedDutyCycles } from "@/scripts/seed/duty-cycles";
 import { seedBilling, seedBillingPlans } from "@/scripts/seed/billing";
+import { seedReportBranding } from "@/scripts/seed/reports";
 
 const db = getDb();
 // Plans first: a new dealership starts its trial from them.
@@ -27,4 +28,6 @@ const plans = await seedBilling(db, {
   billingEmail: "billing@brackenridge.test",
 });
 console.log(`[seed] billing: ${plans} plans, trial accounts ready`);
+await seedReportBranding(db, [tenancy.dealership, tenancy.rival]);
+console.log("[seed] report branding ready");
 await getPool().end();

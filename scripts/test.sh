@@ -15,6 +15,7 @@ export NEXT_DIST_DIR=".next-test"
 ensure_node_modules
 ensure_postgres
 ensure_chromium
+ensure_poppler
 
 STARTED_PG=0
 cleanup() {

@@ -11,23 +11,32 @@ import { AppShell, type NavItem } from "@/lib/ui/app-shell";
 export default async function WorkspaceLayout({ children }: { children: ReactNode }) {
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
-  const nav: NavItem[] = [
-    { href: "/dashboard", label: "Dashboard" },
-    isStaff(actor)
-      ? { href: "/customers", label: "Customers" }
-      : { href: `/customers/${actor.customerId}`, label: "My details" },
-    { href: "/machines", label: "Machines" },
-    { href: "/duty-cycles", label: "Duty cycles" },
-    { href: "/estimates", label: "Estimates" },
-    ...(can(actor, "billing:read") ? [{ href: "/billing", label: "Report plan" }] : []),
-    ...authNavItems(actor),
-  ];
+  // A customer's account is the portal: their machines and what the dealer shared, never the
+  // dealer's drafts, estimates or duty cycles.
+  const nav: NavItem[] = isStaff(actor)
+    ? [
+        { href: "/dashboard", label: "Dashboard" },
+        { href: "/customers", label: "Customers" },
+        { href: "/machines", label: "Machines" },
+        { href: "/duty-cycles", label: "Duty cycles" },
+        { href: "/estimates", label: "Estimates" },
+        { href: "/reports", label: "Reports" },
+        ...(can(actor, "billing:read") ? [{ href: "/billing", label: "Report plan" }] : []),
+        ...authNavItems(actor),
+        ...(can(actor, "staff:manage") ? [{ href: "/settings/branding", label: "Branding" }] : []),
+      ]
+    : [
+        { href: "/dashboard", label: "Home" },
+        { href: "/reports", label: "Reports" },
+        ...(can(actor, "billing:read") ? [{ href: "/billing", label: "Report plan" }] : []),
+        { href: `/customers/${actor.customerId}`, label: "My details" },
+      ];
   return (
     <AppShell
       nav={nav}
       userMenu={
         <div className="flex items-center gap-3">
-          <GlobalSearch />
+          {isStaff(actor) ? <GlobalSearch /> : null}
           <UserMenu />
         </div>
       }

@@ -5,3 +5,4 @@ export { getEstimate, loadEstimate } from "./server/get-estimate";
 export { listEstimates } from "./server/list-estimates";
 export { loadDutyCycleForEstimate } from "./server/load-duty-cycle";
 export type { TEstimateDto, TEstimateRow } from "./schemas/estimate";
+export { estimateTurnsCsv } from "./lib/estimate-csv";

@@ -28,17 +28,19 @@ export const ACTIONS = [
 
 export type TAction = (typeof ACTIONS)[number];
 
-/** Reads a customer account may make, limited to its own customer record. */
+/**
+ * Reads a customer account may make, limited to its own customer record. Duty cycles and
+ * estimates are the dealer's working material: a customer reads what the dealer shares with
+ * them as reports, never the drafts behind them.
+ */
 const CUSTOMER_READS: readonly TAction[] = [
   "customer:read",
   "site:read",
   "machine:read",
-  "duty-cycle:read",
-  "estimate:read",
   "report:read",
 ];
 
-const STAFF_READS: readonly TAction[] = [...CUSTOMER_READS];
+const STAFF_READS: readonly TAction[] = [...CUSTOMER_READS, "duty-cycle:read", "estimate:read"];
 
 const WORKSPACE_WRITES: readonly TAction[] = [
   "customer:write",

@@ -37,6 +37,11 @@ ensure_chromium() {
   command -v chromium >/dev/null 2>&1 || apt_install chromium
 }
 
+# pdftotext and pdftoppm read the quote-report PDFs back in the integration tests.
+ensure_poppler() {
+  command -v pdftotext >/dev/null 2>&1 || apt_install poppler-utils
+}
+
 # Runs a PostgreSQL binary as an unprivileged user: PostgreSQL refuses to run as root.
 pg_as() {
   if as_root; then runuser -u postgres -- "$@"; else "$@"; fi

@@ -71,6 +71,7 @@ type TRecords = {
   machine: { id: string; name: string };
   dutyCycle: { id: string; name: string };
   estimate: { id: string; title: string };
+  report: { id: string; title: string };
 };
 
 async function seedRecords(dealershipId: string, label: string): Promise<TRecords> {
@@ -140,14 +141,84 @@ async function seedRecords(dealershipId: string, label: string): Promise<TRecord
       },
     })
     .returning();
+  const [report] = await db
+    .insert(schema.reports)
+    .values({
+      dealershipId,
+      customerId: customer!.id,
+      machineId: machine!.id,
+      estimateId: estimate!.id,
+      title: `${label} Report ${tag}`,
+      customerName: customer!.name,
+      machineName: machine!.name,
+      latestVersion: 1,
+    })
+    .returning();
+  const { buildReportContent } = await import("@/lib/reports");
+  const emptyResult = estimate!.result as import("@/lib/scrub").TEstimateResult;
+  await db.insert(schema.reportVersions).values({
+    reportId: report!.id,
+    dealershipId,
+    customerId: customer!.id,
+    version: 1,
+    engineVersion: "0.0.0",
+    content: buildReportContent({
+      kind: "estimate",
+      title: report!.title,
+      currency: "EUR",
+      dealership: { name: label, contactLine: "" },
+      customer: { name: customer!.name, contactName: null },
+      dutyCycle: {
+        name: dutyCycle!.name,
+        turns: [],
+        straight: { distancePerHour: 0, speed: 1, surfaceShares: {} },
+      },
+      options: [
+        {
+          key: "current",
+          label: "As fitted",
+          baseline: true,
+          estimateId: estimate!.id,
+          oneOffCost: 0,
+          machine: MATRIX_MACHINE_SPEC,
+          result: emptyResult,
+        },
+      ],
+      recommendations: "",
+      customerNote: "",
+      issuedAt: new Date(),
+      issuedBy: label,
+    }),
+  });
   return {
     customer: { id: customer!.id, name: customer!.name },
     site: { id: site!.id, name: site!.name },
     machine: { id: machine!.id, name: machine!.name },
     dutyCycle: { id: dutyCycle!.id, name: dutyCycle!.name },
     estimate: { id: estimate!.id, title: estimate!.title },
+    report: { id: report!.id, title: report!.title },
   };
 }
+
+/** Enough of a machine for a report's fitment table (the matrix checks access, not figures). */
+const MATRIX_MACHINE_SPEC: import("@/lib/scrub").TMachineInput = {
+  name: "Matrix machine",
+  wheelbase: 2.5,
+  axles: {
+    front: {
+      track: 1.8,
+      load: 2000,
+      tyre: { designation: "380/70R24", treadDepthNew: 35, treadDepthReplace: 8, price: 800 },
+    },
+    rear: {
+      track: 1.8,
+      load: 3000,
+      tyre: { designation: "480/70R34", treadDepthNew: 45, treadDepthReplace: 10, price: 1400 },
+    },
+  },
+  steering: { layout: "ideal", maxLock: 50 },
+  drive: { type: "2wd", drivenAxle: "rear" },
+};
 
 function markersOf(r: TRecords): string[] {
   return [
@@ -161,6 +232,8 @@ function markersOf(r: TRecords): string[] {
     r.dutyCycle.name,
     r.estimate.id,
     r.estimate.title,
+    r.report.id,
+    r.report.title,
   ];
 }
 
@@ -290,6 +363,19 @@ const ROUTE_FIXTURES: Record<string, TRouteFixture> = {
       POST: { customerId: w.home.own.customer.id, name: `Matrix Site`, surfaceMix: { grass: 1 } },
     }),
   },
+  "/api/v1/reports": { body: (w) => ({ POST: { estimateId: w.home.own.estimate.id } }) },
+  "/api/v1/reports/[id]/versions/[version]": {
+    params: (w) => ({ id: w.home.other.report.id, version: "1" }),
+  },
+  "/api/v1/reports/[id]/versions/[version]/pdf": {
+    params: (w) => ({ id: w.home.other.report.id, version: "1" }),
+  },
+  "/api/v1/reports/[id]/versions/[version]/csv": {
+    params: (w) => ({ id: w.home.other.report.id, version: "1" }),
+  },
+  // Branding is a dealership setting: only the dealer admin changes it.
+  "/api/v1/branding": { writers: ["dealer_admin"], body: () => ({ PUT: { currency: "GBP" } }) },
+  "/api/v1/branding/logo": { writers: ["dealer_admin"] },
   "/api/v1/machines/[id]/copy": {
     body: (w) => ({ POST: { customerId: w.home.own.customer.id } }),
   },
@@ -302,6 +388,7 @@ const COLLECTION_IDS: Record<string, (w: TWorld) => string> = {
   machines: (w) => w.home.other.machine.id,
   "duty-cycles": (w) => w.home.other.dutyCycle.id,
   estimates: (w) => w.home.other.estimate.id,
+  reports: (w) => w.home.other.report.id,
   "mapping-templates": (w) => w.home.templateId,
   invitations: (w) => w.home.invitationId,
 };

@@ -8,7 +8,9 @@ import { EstimatesTable } from "@/features/estimates/components/estimates-table"
 import { formatDate } from "@/lib/format/format";
 import { getDashboard } from "@/features/search/server/get-dashboard";
 import { prefetchEstimateList } from "@/features/estimates/server/prefetch-estimates";
-import { can } from "@/lib/authz/policy";
+import { can, isStaff } from "@/lib/authz/policy";
+import { CustomerPortal } from "@/features/reports/components/customer-portal";
+import { getCustomerName } from "@/features/reports/server/get-customer-name";
 import { makeQueryClient } from "@/lib/query/query-client";
 import { Card } from "@/lib/ui/card";
 import { EmptyState } from "@/lib/ui/empty-state";
@@ -21,6 +23,10 @@ const RECENT = listState({ ...DEFAULT_ESTIMATE_LIST, pageSize: 10 });
 export default async function DashboardPage() {
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
+  if (!isStaff(actor)) {
+    const customer = await getCustomerName(getDb(), actor);
+    return <CustomerPortal customerName={customer} />;
+  }
   const qc = makeQueryClient();
   const [summary] = await Promise.all([
     getDashboard({ db: getDb(), actor }),

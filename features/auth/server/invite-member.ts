@@ -1,13 +1,20 @@
 import "server-only";
 import { and, eq, gt, isNull } from "drizzle-orm";
 import type { Db } from "@/db/client";
-import { customers, dealerships, invitations, memberships, users } from "@/db/schema";
+import {
+  customers,
+  dealerships,
+  invitations,
+  memberships,
+  users,
+  type TMembershipRole,
+} from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
 import { can, ROLE_LABELS } from "@/lib/authz/policy";
 import type { TInviteInput } from "@/features/auth/schemas/team";
 import type { TActionState } from "@/features/auth/server/action-state";
 import { recordAudit } from "@/features/auth/server/audit";
-import type { TMailer } from "@/features/auth/server/mailer";
+import type { TMail, TMailer } from "@/features/auth/server/mailer";
 import { invitationMail } from "@/features/auth/server/mail-templates";
 import { newLinkToken } from "@/features/auth/server/tokens";
 
@@ -89,21 +96,54 @@ export async function inviteMember(opts: {
       fieldErrors: { email: "Invitation already pending." },
     };
   }
+  const { invitationId } = await issueInvitation({
+    db,
+    mailer: opts.mailer,
+    actor,
+    email: input.email,
+    role: input.role,
+    customerId: input.role === "customer" ? input.customerId! : null,
+    customerName,
+    appUrl: opts.appUrl,
+    ip: opts.ip,
+  });
+  return { ok: true, message: `Invitation sent to ${input.email}.`, invitationId };
+}
+
+/**
+ * Stores a single-use invitation and e-mails its link, in one transaction (if the mail cannot be
+ * sent, no invitation is left behind). Callers check who may invite first: a dealer admin for
+ * the team page, an estimator sharing a report with a customer who has no account yet.
+ */
+export async function issueInvitation(opts: {
+  db: Db;
+  mailer: TMailer;
+  actor: TActor;
+  email: string;
+  role: TMembershipRole;
+  customerId: string | null;
+  customerName?: string | null;
+  appUrl: string;
+  ip?: string | null;
+  /** A different message around the link (e.g. "a report is waiting for you"). */
+  mail?: (link: { to: string; url: string; dealershipName: string; expiresAt: Date }) => TMail;
+}): Promise<{ invitationId: string }> {
+  const { db, actor } = opts;
   const [dealership] = await db
     .select({ name: dealerships.name })
     .from(dealerships)
     .where(eq(dealerships.id, actor.dealershipId));
+  const dealershipName = dealership?.name ?? "a dealership";
   const { token, hash } = newLinkToken();
   const expiresAt = new Date(Date.now() + INVITATION_TTL_MS);
-  // One transaction: if the mail cannot be sent, no invitation is left behind.
   const invitationId = await db.transaction(async (tx) => {
     const [row] = await tx
       .insert(invitations)
       .values({
         dealershipId: actor.dealershipId,
-        email: input.email,
-        role: input.role,
-        customerId: input.role === "customer" ? input.customerId : null,
+        email: opts.email,
+        role: opts.role,
+        customerId: opts.customerId,
         tokenHash: hash,
         invitedById: actor.userId,
         expiresAt,
@@ -113,21 +153,24 @@ export async function inviteMember(opts: {
       kind: "invitation_sent",
       dealershipIds: [actor.dealershipId],
       actorUserId: actor.userId,
-      subject: input.email,
-      detail: { role: input.role, ...(customerName ? { customer: customerName } : {}) },
+      subject: opts.email,
+      detail: { role: opts.role, ...(opts.customerName ? { customer: opts.customerName } : {}) },
       ip: opts.ip,
     });
+    const url = `${opts.appUrl}/invite/${token}`;
     await opts.mailer.send(
-      invitationMail({
-        to: input.email,
-        url: `${opts.appUrl}/invite/${token}`,
-        dealershipName: dealership?.name ?? "a dealership",
-        roleLabel: ROLE_LABELS[input.role],
-        inviterName: actor.name ?? actor.email,
-        expiresAt,
-      }),
+      opts.mail
+        ? opts.mail({ to: opts.email, url, dealershipName, expiresAt })
+        : invitationMail({
+            to: opts.email,
+            url,
+            dealershipName,
+            roleLabel: ROLE_LABELS[opts.role],
+            inviterName: actor.name ?? actor.email,
+            expiresAt,
+          }),
     );
     return row!.id;
   });
-  return { ok: true, message: `Invitation sent to ${input.email}.`, invitationId };
+  return { invitationId };
 }

@@ -3,10 +3,11 @@ import { and, asc, desc, eq, ilike, or, type SQL } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { customers, estimates } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
+import { can } from "@/lib/authz/policy";
 import type { TPage } from "@/lib/query/list-query";
 import type { TEstimateListQuery } from "@/features/estimates/schemas/estimate-list-query";
 import type { TEstimateRow } from "@/features/estimates/schemas/estimate";
-import { customerScope } from "@/features/platform";
+import { ApiError, customerScope } from "@/features/platform";
 import {
   bind,
   likePattern,
@@ -37,6 +38,12 @@ export async function listEstimates({
   actor: TActor;
   query: TEstimateListQuery;
 }): Promise<TPage<TEstimateRow>> {
+  if (!can(actor, "estimate:read"))
+    throw new ApiError(
+      403,
+      "forbidden",
+      "Estimates are your dealer's working material; the reports they share with you are under Reports.",
+    );
   const params: Record<string, unknown> = {
     dealershipId: actor.dealershipId,
     ...pageWindow(query.page, query.pageSize),

@@ -130,16 +130,17 @@ describe("builder duty cycles", () => {
       .where(eq(dutyCycleTurns.dutyCycleId, id));
     expect(n!.n).toBe(4);
 
-    // The customer account sees its own duty cycle but may not change it.
+    // Duty cycles are the dealer's working material: the customer account neither sees nor
+    // changes its own (it reads the reports shared with it).
     expect(
       (await callRoute(getCycle, customerAccount.cookie, `/x/${id}`, { params: { id } })).status,
-    ).toBe(200);
+    ).toBe(404);
     const refused = await callRoute(patchCycle, customerAccount.cookie, `/x/${id}`, {
       method: "PATCH",
       params: { id },
       json: { name: "Mine now", version: 1 },
     });
-    expect(refused.status).toBe(403);
+    expect(refused.status).toBe(404);
 
     const input = structuredClone(preset.input);
     const yard = input.blocks[0]!;

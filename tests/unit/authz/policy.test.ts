@@ -55,7 +55,11 @@ const EXPECTED: Record<TRole, TAction[]> = {
   ],
   estimator: [...READS, ...WRITES, "account:manage", "billing:read"],
   billing_admin: [...READS, "billing:manage", "billing:read", "account:manage"],
-  customer: [...READS, "account:manage"],
+  // Duty cycles and estimates stay with the dealer; the customer reads shared reports.
+  customer: [
+    ...READS.filter((a) => a !== "duty-cycle:read" && a !== "estimate:read"),
+    "account:manage",
+  ],
 };
 
 describe("can: role grants inside the actor's own dealership", () => {
@@ -81,15 +85,24 @@ describe("can: another dealership's resource is always refused", () => {
 
 describe("can: customer accounts see only their own customer record", () => {
   const a = actor(["customer"], CUST);
-  it.each(READS)("%s of their own record is allowed", (action) => {
-    expect(can(a, action, { dealershipId: D, customerId: CUST })).toBe(true);
-  });
+  it.each(EXPECTED.customer.filter((x) => x !== "account:manage"))(
+    "%s of their own record is allowed",
+    (action) => {
+      expect(can(a, action, { dealershipId: D, customerId: CUST })).toBe(true);
+    },
+  );
   it.each(READS)("%s of another customer's record is refused", (action) => {
     expect(can(a, action, { dealershipId: D, customerId: OTHER_CUST })).toBe(false);
   });
   it.each(READS)("%s of a dealership template (no customer) is refused", (action) => {
     expect(can(a, action, { dealershipId: D, customerId: null })).toBe(false);
   });
+  it.each(["duty-cycle:read", "estimate:read"] as TAction[])(
+    "%s is refused even for their own record: drafts stay with the dealer",
+    (action) => {
+      expect(can(a, action, { dealershipId: D, customerId: CUST })).toBe(false);
+    },
+  );
   it("a customer role with no customer record reads nothing", () => {
     expect(
       can(actor(["customer"], null), "machine:read", { dealershipId: D, customerId: null }),

@@ -25,9 +25,12 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
         <Card title="Machines">
           <MachinesTable canWrite={canWrite} customerId={id} />
         </Card>
-        <Card title="Estimates">
-          <EstimatesTable canRun={canWrite} customerId={id} pageSize={10} />
-        </Card>
+        {/* Estimates are the dealer's drafts: a customer account reads shared reports. */}
+        {can(actor, "estimate:read") ? (
+          <Card title="Estimates">
+            <EstimatesTable canRun={canWrite} customerId={id} pageSize={10} />
+          </Card>
+        ) : null}
       </CustomerDetail>
     </HydrationBoundary>
   );

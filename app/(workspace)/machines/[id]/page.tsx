@@ -30,9 +30,11 @@ export default async function MachinePage({ params }: { params: Promise<{ id: st
         canWrite={can(actor, "machine:write")}
         canRun={canRun}
       >
-        <Card title="Estimates for this machine">
-          <EstimatesTable canRun={canRun} machineId={id} pageSize={10} />
-        </Card>
+        {can(actor, "estimate:read") ? (
+          <Card title="Estimates for this machine">
+            <EstimatesTable canRun={canRun} machineId={id} pageSize={10} />
+          </Card>
+        ) : null}
       </MachineDetail>
     </HydrationBoundary>
   );

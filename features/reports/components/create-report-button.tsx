@@ -1,0 +1,29 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { Button } from "@/lib/ui/button";
+import { useCreateReport } from "@/features/reports/api/reports";
+
+/** Starts a draft quote report from an estimate and opens it. */
+export function CreateReportButton({ estimateId }: { estimateId: string }) {
+  const create = useCreateReport();
+  const router = useRouter();
+  return (
+    <div className="flex flex-col items-start gap-1">
+      <Button
+        size="sm"
+        busy={create.isPending}
+        onClick={() =>
+          create.mutate({ estimateId }, { onSuccess: (r) => router.push(`/reports/${r.id}`) })
+        }
+      >
+        Prepare a quote report
+      </Button>
+      {create.error ? (
+        <p role="alert" className="text-sm text-danger-700">
+          {create.error.message}
+        </p>
+      ) : null}
+    </div>
+  );
+}
