@@ -29,3 +29,6 @@ export {
   type TTreadAlert,
   type TAlertKind,
 } from "./alerts";
+export { computeFleet, type TFleetMachine, type TFleetMachineInput } from "./fleet";
+export { calibratedEngineInputs } from "./engine-options";
+export { parseReadingsCsv, parsePosition, type TParsedReadingRow } from "./readings-csv";

@@ -11,8 +11,8 @@ export type TPlanPositionInput = {
   designation: string;
   price: number;
   treadDepthReplace: number;
-  /** Predicted wear in mm per 100 h (calibrated where a calibration exists). */
-  wearPer100h: number;
+  /** Predicted wear in mm per 100 h (calibrated where a calibration exists); null: no estimate. */
+  wearPer100h: number | null;
   calibrated: boolean;
   /** Every reading of the machine; the position's current fitment is picked out here. */
   readings: readonly TReadingPoint[];
@@ -20,7 +20,8 @@ export type TPlanPositionInput = {
   hoursPerWeek: number | null;
 };
 
-export type TPlanStatus = "planned" | "due-now" | "no-reading" | "no-usage" | "no-wear";
+export type TPlanStatus =
+  "planned" | "due-now" | "no-reading" | "no-usage" | "no-wear" | "no-estimate";
 
 export type TPlanItem = {
   machineId: string;
@@ -77,6 +78,7 @@ export function planPosition(p: TPlanPositionInput): TPlanItem {
       dueOn: last.measuredOn,
     };
   }
+  if (p.wearPer100h === null) return { ...base, status: "no-estimate" };
   if (!(p.wearPer100h > 0)) return { ...base, status: "no-wear" };
   const hoursLeft = (remaining / p.wearPer100h) * 100;
   const withHours = { ...base, hoursLeft, dueHourMeter: last.hourMeter + hoursLeft };
