@@ -96,7 +96,12 @@ export async function loadFleet(
     });
     readingsById.set(r.machineId, list);
   }
-  const inputs: TFleetMachineInput[] = rows.map((m) => {
+  // A machine whose spec lacks tyres (never stored by the app, but possible in old rows) is left out.
+  const usable = rows.filter((m) => {
+    const axles = (m.spec as Partial<TMachineInput> | null)?.axles;
+    return Boolean(axles?.front?.tyre && axles?.rear?.tyre);
+  });
+  const inputs: TFleetMachineInput[] = usable.map((m) => {
     const spec = m.spec as TMachineInput;
     const basis = basisById.get(m.id);
     const positions: TPositionBasis[] | null =
