@@ -71,6 +71,7 @@ type TRecords = {
   machine: { id: string; name: string };
   dutyCycle: { id: string; name: string };
   estimate: { id: string; title: string };
+  reading: { id: string; photoId: string };
 };
 
 async function seedRecords(dealershipId: string, label: string): Promise<TRecords> {
@@ -140,7 +141,30 @@ async function seedRecords(dealershipId: string, label: string): Promise<TRecord
       },
     })
     .returning();
+  const [reading] = await db
+    .insert(schema.treadReadings)
+    .values({
+      dealershipId,
+      machineId: machine!.id,
+      position: "front-left",
+      measuredOn: "2026-01-05",
+      hourMeter: 100,
+      depthCentre: 30,
+      measuredBy: `${label} Measurer ${tag}`,
+    })
+    .returning();
+  const [photo] = await db
+    .insert(schema.treadReadingPhotos)
+    .values({
+      dealershipId,
+      readingId: reading!.id,
+      contentType: "image/png",
+      byteSize: 8,
+      bytes: Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    })
+    .returning();
   return {
+    reading: { id: reading!.id, photoId: photo!.id },
     customer: { id: customer!.id, name: customer!.name },
     site: { id: site!.id, name: site!.name },
     machine: { id: machine!.id, name: machine!.name },
@@ -161,6 +185,7 @@ function markersOf(r: TRecords): string[] {
     r.dutyCycle.name,
     r.estimate.id,
     r.estimate.title,
+    r.reading.id,
   ];
 }
 
@@ -297,6 +322,8 @@ const COLLECTION_IDS: Record<string, (w: TWorld) => string> = {
   "duty-cycles": (w) => w.home.other.dutyCycle.id,
   estimates: (w) => w.home.other.estimate.id,
   "mapping-templates": (w) => w.home.templateId,
+  readings: (w) => w.home.other.reading.id,
+  "reading-photos": (w) => w.home.other.reading.photoId,
   invitations: (w) => w.home.invitationId,
 };
 const NAMED_IDS: Record<string, (w: TWorld) => string> = {

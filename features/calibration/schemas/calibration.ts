@@ -5,7 +5,7 @@ export type TMachineCalibrationDto = {
   machine: { id: string; name: string; customerId: string | null };
   canWrite: boolean;
   currency: string;
-  tyres: Record<"front" | "rear", { treadDepthNew: number; treadDepthReplace: number }>;
+  tyres: Record<"front" | "rear", { treadDepthNew: number; treadDepthReplace: number }> | null;
   readings: TReadingDto[];
   /** The estimate whose per-position wear the fit scales; null before any estimate is run. */
   basis: { estimateId: string; createdAt: string } | null;

@@ -2,6 +2,7 @@ import "server-only";
 import type { DbOrTx } from "@/db/client";
 import type { TActor } from "@/lib/authz/actor";
 import { can } from "@/lib/authz/policy";
+import type { TMachineInput } from "@/lib/scrub";
 import { loadMachine } from "@/features/workspace/server/get-machine";
 import { listReadings } from "@/features/calibration/server/list-readings";
 import { loadFleet } from "@/features/calibration/server/load-fleet";
@@ -28,20 +29,15 @@ export async function getMachineCalibration({
     dealershipCurrency(db, actor.dealershipId),
   ]);
   const mine = fleet.find((m) => m.machineId === machine.id);
-  const spec = machine.spec as {
-    axles: {
-      front: { tyre: { treadDepthNew: number; treadDepthReplace: number } };
-      rear: { tyre: { treadDepthNew: number; treadDepthReplace: number } };
-    };
-  };
+  const axles = (machine.spec as Partial<TMachineInput> | null)?.axles;
   return {
     machine: { id: machine.id, name: machine.name, customerId: machine.customerId },
     canWrite: can(actor, "machine:write", machine),
     currency,
-    tyres: {
-      front: spec.axles.front.tyre,
-      rear: spec.axles.rear.tyre,
-    },
+    tyres:
+      axles?.front?.tyre && axles.rear?.tyre
+        ? { front: axles.front.tyre, rear: axles.rear.tyre }
+        : null,
     readings,
     basis: basis.get(machine.id) ?? null,
     fleet: mine ?? null,
