@@ -19,6 +19,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
     { href: "/machines", label: "Machines" },
     { href: "/duty-cycles", label: "Duty cycles" },
     { href: "/estimates", label: "Estimates" },
+    { href: "/tyre-plan", label: isStaff(actor) ? "Tyre plan" : "My tyre plan" },
     ...authNavItems(actor),
   ];
   return (

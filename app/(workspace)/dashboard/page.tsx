@@ -9,6 +9,9 @@ import { formatDate } from "@/features/workspace/components/format";
 import { getDashboard } from "@/features/workspace/server/get-dashboard";
 import { prefetch } from "@/features/workspace/server/prefetch";
 import { can } from "@/lib/authz/policy";
+import { DashboardTread } from "@/features/calibration/components/dashboard-tread";
+import { getTreadAlerts } from "@/features/calibration/server/get-tread-alerts";
+import { getTyrePlan } from "@/features/calibration/server/get-tyre-plan";
 import { makeQueryClient } from "@/lib/query/query-client";
 import { Card } from "@/lib/ui/card";
 import { EmptyState } from "@/lib/ui/empty-state";
@@ -17,13 +20,20 @@ export const metadata = { title: "Dashboard" };
 
 const RECENT = listState({ ...DEFAULT_LISTS.estimates, pageSize: 10 });
 
-export default async function DashboardPage() {
+export default async function DashboardPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ alertHours?: string }>;
+}) {
+  const { alertHours } = await searchParams;
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   const qc = makeQueryClient();
-  const [summary] = await Promise.all([
+  const [summary, , alerts, plan] = await Promise.all([
     getDashboard({ db: getDb(), actor }),
     prefetch.estimates(qc, actor, RECENT),
+    getTreadAlerts({ db: getDb(), actor, withinHours: alertHours }),
+    getTyrePlan({ db: getDb(), actor, query: { months: 3 } }),
   ]);
   const canRun = can(actor, "estimate:run");
   return (
@@ -65,6 +75,7 @@ export default async function DashboardPage() {
           </div>
         ))}
       </dl>
+      <DashboardTread alerts={alerts} dueSoon={plan.dueSoon} />
       <Card title="Recent estimates">
         <HydrationBoundary state={dehydrate(qc)}>
           <EstimatesTable canRun={canRun} pageSize={10} />

@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import Link from "next/link";
+import { useRouter } from "next/navigation";
 import type { TPositionPrediction } from "@/lib/calibration";
 import { Button } from "@/lib/ui/button";
 import { Caution } from "@/lib/ui/caution";
@@ -29,6 +30,7 @@ export function CalibrationPanel({
 }) {
   const [mode, setMode] = useState<"calibrated" | "uncalibrated">("calibrated");
   const save = useCreateCalibratedEstimate(data.machine.id);
+  const router = useRouter();
   const fleet = data.fleet;
   if (!data.basis || !fleet) {
     return (
@@ -137,7 +139,7 @@ export function CalibrationPanel({
               toast.success("Calibrated estimate saved.", {
                 action: {
                   label: "Open",
-                  onClick: () => (window.location.href = `/estimates/${id}`),
+                  onClick: () => router.push(`/estimates/${id}`),
                 },
               });
             } catch (e) {

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import type { TTyrePosition } from "@/lib/calibration";
 import { ApiError } from "@/lib/query/api-fetch";
 import { Button } from "@/lib/ui/button";
@@ -53,7 +53,7 @@ export function ReadingForm({
   const [serverErrors, setServerErrors] = useState<Record<string, string[]>>({});
   const record = useRecordReading(machineId);
   const unit = depthUnit(system);
-  const { register, handleSubmit, watch, resetField } = useForm<TValues>({
+  const { register, handleSubmit, control, resetField } = useForm<TValues>({
     defaultValues: {
       measuredOn: new Date().toISOString().slice(0, 10),
       hourMeter: "",
@@ -66,7 +66,7 @@ export function ReadingForm({
       note: "",
     },
   });
-  const tyreChange = watch("tyreChange");
+  const tyreChange = useWatch({ control, name: "tyreChange" });
   const depth = (raw: string) => {
     const v = toNumber(raw);
     return v === null || !Number.isFinite(v) ? null : depthToMm(system, v);

@@ -44,10 +44,8 @@ export function TreadWorkbench({
     }),
   );
   const fleet = data.fleet;
-  const rate = (
-    list: typeof fleet extends null ? never : NonNullable<typeof fleet>["predicted"] | undefined,
-    p: TTyrePosition,
-  ) => list?.find((x) => x.position === p)?.wearPer100h.total ?? null;
+  const rate = (list: readonly TPositionPrediction[], p: TTyrePosition) =>
+    list.find((x) => x.position === p)?.wearPer100h.total ?? null;
   return (
     <div className="flex flex-col gap-5">
       <header className="flex flex-col gap-1">

@@ -10,8 +10,8 @@ import {
   type TEstimateOptions,
   type TMachineInput,
 } from "@/lib/scrub";
-import { assertMayRunEstimates } from "@/features/workspace/server/authorize";
-import { CalibrationError } from "@/features/calibration/server/errors";
+import { can } from "@/lib/authz/policy";
+import { CalibrationError, forbidden } from "@/features/calibration/server/errors";
 import { getMachineCalibration } from "@/features/calibration/server/get-machine-calibration";
 
 export type TCalibrationRecord = {
@@ -38,7 +38,7 @@ export async function createCalibratedEstimate({
   actor: TActor;
   machineId: string;
 }): Promise<{ id: string; calibration: TCalibrationRecord }> {
-  assertMayRunEstimates(actor);
+  if (!can(actor, "estimate:run")) throw forbidden("estimates");
   const cal = await getMachineCalibration({ db, actor, machineId });
   const c = cal.fleet?.calibration;
   if (!cal.basis || !c) {

@@ -1,7 +1,7 @@
 import "server-only";
 import type { DbOrTx } from "@/db/client";
 import type { TActor } from "@/lib/authz/actor";
-import { toCsv } from "@/features/workspace/lib/csv";
+import { csvLine } from "@/lib/duty-cycles/csv-export";
 import { getTyrePlan } from "@/features/calibration/server/get-tyre-plan";
 
 const STATUS_WORDS: Record<string, string> = {
@@ -24,36 +24,35 @@ export async function exportTyrePlanCsv({
   query?: unknown;
 }): Promise<string> {
   const plan = await getTyrePlan({ db, actor, query });
-  return toCsv(
-    [
-      "customer",
-      "machine",
-      "position",
-      "tyre size",
-      "status",
-      "calibrated",
-      "last reading",
-      "hour meter at last reading (h)",
-      "depth now (mm)",
-      "hours left (h)",
-      "due at hour meter (h)",
-      "due on",
-      `tyre price (${plan.currency})`,
-    ],
-    plan.items.map((i) => [
-      i.customerName,
-      i.machineName,
-      i.position,
-      i.designation,
-      STATUS_WORDS[i.status] ?? i.status,
-      i.calibrated,
-      i.lastReadOn,
-      i.lastHourMeter,
-      i.depthNow === null ? null : Math.round(i.depthNow * 10) / 10,
-      i.hoursLeft === null ? null : Math.round(i.hoursLeft),
-      i.dueHourMeter === null ? null : Math.round(i.dueHourMeter),
-      i.dueOn,
-      i.price,
-    ]),
-  );
+  const header = [
+    "customer",
+    "machine",
+    "position",
+    "tyre size",
+    "status",
+    "calibrated",
+    "last reading",
+    "hour meter at last reading (h)",
+    "depth now (mm)",
+    "hours left (h)",
+    "due at hour meter (h)",
+    "due on",
+    `tyre price (${plan.currency})`,
+  ];
+  const rows = plan.items.map((i) => [
+    i.customerName,
+    i.machineName,
+    i.position,
+    i.designation,
+    STATUS_WORDS[i.status] ?? i.status,
+    i.calibrated ? "yes" : "no",
+    i.lastReadOn,
+    i.lastHourMeter,
+    i.depthNow === null ? null : Math.round(i.depthNow * 10) / 10,
+    i.hoursLeft === null ? null : Math.round(i.hoursLeft),
+    i.dueHourMeter === null ? null : Math.round(i.dueHourMeter),
+    i.dueOn,
+    i.price,
+  ]);
+  return [header, ...rows].map((r) => csvLine(r)).join("");
 }

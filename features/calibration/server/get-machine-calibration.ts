@@ -3,7 +3,7 @@ import type { DbOrTx } from "@/db/client";
 import type { TActor } from "@/lib/authz/actor";
 import { can } from "@/lib/authz/policy";
 import type { TMachineInput } from "@/lib/scrub";
-import { loadMachine } from "@/features/workspace/server/get-machine";
+import { loadMachine } from "@/features/calibration/server/load-machine";
 import { listReadings } from "@/features/calibration/server/list-readings";
 import { loadFleet } from "@/features/calibration/server/load-fleet";
 import { dealershipCurrency } from "@/features/calibration/server/dealership-currency";

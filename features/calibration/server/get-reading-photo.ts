@@ -3,7 +3,7 @@ import { and, eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { treadReadingPhotos, treadReadings } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
-import { loadMachine } from "@/features/workspace/server/get-machine";
+import { loadMachine } from "@/features/calibration/server/load-machine";
 import { notFound } from "@/features/calibration/server/errors";
 
 /** A reading's photo, for whoever may read the machine. */

@@ -4,7 +4,7 @@ import type { DbOrTx } from "@/db/client";
 import { treadReadings } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
 import { parseReadingsCsv } from "@/lib/calibration";
-import { loadMachine } from "@/features/workspace/server/get-machine";
+import { loadMachine } from "@/features/calibration/server/load-machine";
 import { CalibrationError, parseOrThrow } from "@/features/calibration/server/errors";
 
 const ZImport = z.object({

@@ -3,7 +3,7 @@ import { asc, eq, inArray } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { treadReadingPhotos, treadReadings } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
-import { loadMachine } from "@/features/workspace/server/get-machine";
+import { loadMachine } from "@/features/calibration/server/load-machine";
 import type { TReadingDto } from "@/features/calibration/schemas/reading";
 import { toReadingDto } from "@/features/calibration/server/reading-dto";
 

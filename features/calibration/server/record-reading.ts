@@ -3,7 +3,7 @@ import { and, eq, gt, lt } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { treadReadingPhotos, treadReadings } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
-import { loadMachine } from "@/features/workspace/server/get-machine";
+import { loadMachine } from "@/features/calibration/server/load-machine";
 import {
   PHOTO_MAX_BYTES,
   PHOTOS_PER_READING,

@@ -3,7 +3,7 @@ import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getDb } from "@/db/client";
 import { getActor } from "@/features/auth/server/get-actor";
 import { isUuid } from "@/features/workspace/server/prefetch";
-import { WorkspaceError } from "@/features/workspace/server/errors";
+import { CalibrationError } from "@/features/calibration/server/errors";
 import { calibrationKeys } from "@/features/calibration/api/calibration";
 import { TreadWorkbench } from "@/features/calibration/components/tread-workbench";
 import { getMachineCalibration } from "@/features/calibration/server/get-machine-calibration";
@@ -22,7 +22,7 @@ export default async function TreadPage({ params }: { params: Promise<{ id: stri
     const data = await getMachineCalibration({ db: getDb(), actor, machineId: id });
     qc.setQueryData(calibrationKeys.machine(id), data);
   } catch (e) {
-    if (e instanceof WorkspaceError && e.status === 404) notFound();
+    if (e instanceof CalibrationError && e.status === 404) notFound();
     throw e;
   }
   return (

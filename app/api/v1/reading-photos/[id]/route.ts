@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, respond } from "@/features/workspace/server/respond";
+import { pathId, respond } from "@/features/calibration/server/respond";
 import { getReadingPhoto } from "@/features/calibration/server/get-reading-photo";
 
 export const GET = withActor(async ({ actor, params }) => {

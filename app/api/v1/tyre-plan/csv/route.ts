@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { queryOf, respond } from "@/features/workspace/server/respond";
+import { queryOf, respond } from "@/features/calibration/server/respond";
 import { exportTyrePlanCsv } from "@/features/calibration/server/export-tyre-plan-csv";
 
 export const GET = withActor(async ({ req, actor }) => {

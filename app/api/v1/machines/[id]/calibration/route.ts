@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, respond } from "@/features/workspace/server/respond";
+import { pathId, respond } from "@/features/calibration/server/respond";
 import { getMachineCalibration } from "@/features/calibration/server/get-machine-calibration";
 import { createCalibratedEstimate } from "@/features/calibration/server/create-calibrated-estimate";
 

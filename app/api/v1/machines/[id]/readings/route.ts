@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, readJson, respond } from "@/features/workspace/server/respond";
+import { pathId, readJson, respond } from "@/features/calibration/server/respond";
 import { listReadings } from "@/features/calibration/server/list-readings";
 import { recordReading, type TPhotoUpload } from "@/features/calibration/server/record-reading";
 import { CalibrationError } from "@/features/calibration/server/errors";

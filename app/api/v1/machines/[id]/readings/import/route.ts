@@ -1,6 +1,6 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, readJson, respond } from "@/features/workspace/server/respond";
+import { pathId, readJson, respond } from "@/features/calibration/server/respond";
 import { importReadings } from "@/features/calibration/server/import-readings";
 
 /** Body: `{ csv, depthUnit?, measuredBy? }`. */
