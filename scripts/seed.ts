@@ -4,6 +4,7 @@ import { seedTenancy } from "@/scripts/seed/tenancy";
 import { seedAccounts } from "@/scripts/seed/accounts";
 import { seedWorkspace } from "@/scripts/seed/workspace";
 import { seedDutyCycles } from "@/scripts/seed/duty-cycles";
+import { seedReadings } from "@/scripts/seed/readings";
 
 const db = getDb();
 const tenancy = await seedTenancy(db);
@@ -19,4 +20,6 @@ const workspace = await seedWorkspace(db, {
 console.log(
   `[seed] workspace: ${workspace.machines} demo machines, ${workspace.templates} templates, ${workspace.estimatesAdded} new estimates`,
 );
+const readings = await seedReadings(db, { dealership: tenancy.dealership });
+console.log(`[seed] tread readings: ${readings.added} new`);
 await getPool().end();

@@ -74,8 +74,9 @@ export function fitWear(intervals: readonly TWearInterval[]): TFitResult {
   ) as TMultipliers;
   const fitted = rows.map((r) => r.reduce((s, v, j) => s + v * (solution[j] ?? 0), 0));
   const residuals = y.map((v, i) => v - fitted[i]!);
-  const mean = y.reduce((s, v) => s + v, 0) / n;
-  const ssTot = y.reduce((s, v) => s + (v - mean) ** 2, 0);
+  // The model has no intercept, so R² is taken about zero (uncentred), as usual for regression
+  // through the origin (Eisenhauer, "Regression through the Origin", Teaching Statistics 2003).
+  const ssTot = y.reduce((s, v) => s + v * v, 0);
   const ssRes = residuals.reduce((s, v) => s + v * v, 0);
   return {
     ok: true,

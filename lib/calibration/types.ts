@@ -27,7 +27,7 @@ export type TWearInterval = {
 };
 
 export type TFitQuality = {
-  /** Coefficient of determination of measured against fitted loss (1 = perfect). */
+  /** Uncentred coefficient of determination of measured against fitted loss (1 = perfect). */
   r2: number;
   /** Root-mean-square residual, mm. */
   rmse: number;
