@@ -15,6 +15,7 @@ export type TCalibration =
       fit: Extract<TFitResult, { ok: true }>;
       /** Why the machine's own fit was not used (pooled only). */
       ownRefusal?: Extract<TFitResult, { ok: false }>;
+      /** Other machines whose readings the pooled fit used (pooled only). */
       pooledMachines?: number;
     }
   | {
@@ -60,7 +61,7 @@ export function calibrateFleet(
         multipliers: pooled.multipliers,
         fit: pooled,
         ownRefusal: own,
-        pooledMachines: members.length,
+        pooledMachines: members.filter((o) => o !== m && o.intervals.length > 0).length,
       });
     } else {
       out.set(m.machineId, { source: "none", own, pooled: pooled && !pooled.ok ? pooled : null });

@@ -69,7 +69,7 @@ export function CalibrationPanel({
       ) : null}
       <p className="text-sm font-medium" data-testid="calibration-status">
         {calibrated && mode === "calibrated"
-          ? `Calibrated from ${c.source === "machine" ? "this machine's readings" : `the readings of ${c.pooledMachines} machines with the same tyres and ground`}.`
+          ? `Calibrated from ${c.source === "machine" ? "this machine's readings" : `the readings of ${c.pooledMachines} other machine${c.pooledMachines === 1 ? "" : "s"} with the same tyres and ground`}.`
           : "Not calibrated: the wear model as published."}
       </p>
       <div className="overflow-x-auto">

@@ -239,6 +239,7 @@ describe("refusals", () => {
     expect(b?.source).toBe("pooled");
     if (b?.source === "pooled") {
       expect(b.ownRefusal?.code).toBe("too-few-readings");
+      expect(b.pooledMachines).toBe(1);
       expect(b.multipliers.base).toBeCloseTo(1.2, 1);
     }
     expect(result.get("c")).toMatchObject({ source: "none", own: { code: "too-few-readings" } });
