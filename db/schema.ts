@@ -5,3 +5,4 @@ export * from "@/db/tables/duty-cycles";
 export * from "@/db/tables/accounts";
 export * from "@/db/tables/billing";
 export * from "@/db/tables/reports";
+export * from "@/db/tables/readings";

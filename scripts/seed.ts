@@ -6,6 +6,7 @@ import { seedWorkspace } from "@/scripts/seed/workspace";
 import { seedDutyCycles } from "@/scripts/seed/duty-cycles";
 import { seedBilling, seedBillingPlans } from "@/scripts/seed/billing";
 import { seedReportBranding } from "@/scripts/seed/reports";
+import { seedReadings } from "@/scripts/seed/readings";
 
 const db = getDb();
 // Plans first: a new dealership starts its trial from them.
@@ -30,4 +31,6 @@ const plans = await seedBilling(db, {
 console.log(`[seed] billing: ${plans} plans, trial accounts ready`);
 await seedReportBranding(db, [tenancy.dealership, tenancy.rival]);
 console.log("[seed] report branding ready");
+const readings = await seedReadings(db, { dealership: tenancy.dealership });
+console.log(`[seed] tread readings: ${readings.added} new`);
 await getPool().end();

@@ -21,6 +21,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
         { href: "/duty-cycles", label: "Duty cycles" },
         { href: "/estimates", label: "Estimates" },
         { href: "/reports", label: "Reports" },
+        { href: "/tyre-plan", label: "Tyre plan" },
         ...(can(actor, "billing:read") ? [{ href: "/billing", label: "Report plan" }] : []),
         ...authNavItems(actor),
         ...(can(actor, "staff:manage") ? [{ href: "/settings/branding", label: "Branding" }] : []),
@@ -29,6 +30,7 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
         { href: "/dashboard", label: "Home" },
         { href: "/reports", label: "Reports" },
         ...(can(actor, "billing:read") ? [{ href: "/billing", label: "Report plan" }] : []),
+        { href: "/tyre-plan", label: "My tyre plan" },
         { href: `/customers/${actor.customerId}`, label: "My details" },
       ];
   return (

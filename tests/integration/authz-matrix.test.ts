@@ -72,6 +72,7 @@ type TRecords = {
   dutyCycle: { id: string; name: string };
   estimate: { id: string; title: string };
   report: { id: string; title: string };
+  reading: { id: string; photoId: string };
 };
 
 async function seedRecords(dealershipId: string, label: string): Promise<TRecords> {
@@ -190,7 +191,30 @@ async function seedRecords(dealershipId: string, label: string): Promise<TRecord
       issuedBy: label,
     }),
   });
+  const [reading] = await db
+    .insert(schema.treadReadings)
+    .values({
+      dealershipId,
+      machineId: machine!.id,
+      position: "front-left",
+      measuredOn: "2026-01-05",
+      hourMeter: 100,
+      depthCentre: 30,
+      measuredBy: `${label} Measurer ${tag}`,
+    })
+    .returning();
+  const [photo] = await db
+    .insert(schema.treadReadingPhotos)
+    .values({
+      dealershipId,
+      readingId: reading!.id,
+      contentType: "image/png",
+      byteSize: 8,
+      bytes: Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    })
+    .returning();
   return {
+    reading: { id: reading!.id, photoId: photo!.id },
     customer: { id: customer!.id, name: customer!.name },
     site: { id: site!.id, name: site!.name },
     machine: { id: machine!.id, name: machine!.name },
@@ -234,6 +258,7 @@ function markersOf(r: TRecords): string[] {
     r.estimate.title,
     r.report.id,
     r.report.title,
+    r.reading.id,
   ];
 }
 
@@ -390,6 +415,8 @@ const COLLECTION_IDS: Record<string, (w: TWorld) => string> = {
   estimates: (w) => w.home.other.estimate.id,
   reports: (w) => w.home.other.report.id,
   "mapping-templates": (w) => w.home.templateId,
+  readings: (w) => w.home.other.reading.id,
+  "reading-photos": (w) => w.home.other.reading.photoId,
   invitations: (w) => w.home.invitationId,
 };
 const NAMED_IDS: Record<string, (w: TWorld) => string> = {

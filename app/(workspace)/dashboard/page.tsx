@@ -11,6 +11,9 @@ import { prefetchEstimateList } from "@/features/estimates/server/prefetch-estim
 import { can, isStaff } from "@/lib/authz/policy";
 import { CustomerPortal } from "@/features/reports/components/customer-portal";
 import { getCustomerName } from "@/features/reports/server/get-customer-name";
+import { DashboardTread } from "@/features/calibration/components/dashboard-tread";
+import { getTreadAlerts } from "@/features/calibration/server/get-tread-alerts";
+import { getTyrePlan } from "@/features/calibration/server/get-tyre-plan";
 import { makeQueryClient } from "@/lib/query/query-client";
 import { Card } from "@/lib/ui/card";
 import { EmptyState } from "@/lib/ui/empty-state";
@@ -20,7 +23,12 @@ export const metadata = { title: "Dashboard" };
 
 const RECENT = listState({ ...DEFAULT_ESTIMATE_LIST, pageSize: 10 });
 
-export default async function DashboardPage() {
+export default async function DashboardPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ alertHours?: string }>;
+}) {
+  const { alertHours } = await searchParams;
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   if (!isStaff(actor)) {
@@ -28,9 +36,11 @@ export default async function DashboardPage() {
     return <CustomerPortal customerName={customer} />;
   }
   const qc = makeQueryClient();
-  const [summary] = await Promise.all([
+  const [summary, , alerts, plan] = await Promise.all([
     getDashboard({ db: getDb(), actor }),
     prefetchEstimateList(qc, actor, RECENT),
+    getTreadAlerts({ db: getDb(), actor, withinHours: alertHours }),
+    getTyrePlan({ db: getDb(), actor, query: { months: 3 } }),
   ]);
   const canRun = can(actor, "estimate:run");
   return (
@@ -72,6 +82,7 @@ export default async function DashboardPage() {
           </div>
         ))}
       </dl>
+      <DashboardTread alerts={alerts} dueSoon={plan.dueSoon} />
       <Card title="Recent estimates">
         <HydrationBoundary state={dehydrate(qc)}>
           <EstimatesTable canRun={canRun} pageSize={10} />

@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getDb } from "@/db/client";
@@ -23,6 +24,12 @@ export default async function MachinePage({ params }: { params: Promise<{ id: st
   const canRun = can(actor, "estimate:run");
   return (
     <HydrationBoundary state={dehydrate(qc)}>
+      <Link
+        href={`/machines/${id}/tread`}
+        className="mb-4 inline-flex h-11 items-center rounded-md border border-ink-300 bg-white px-4 font-medium text-ink-800 hover:bg-ink-100"
+      >
+        Tread readings and calibration
+      </Link>
       <MachineDetail
         id={id}
         customers={customers}
