@@ -1,7 +1,7 @@
 import { redirect } from "next/navigation";
 import { getDb } from "@/db/client";
 import { getActor } from "@/features/auth/server/get-actor";
-import { listCustomerChoices } from "@/features/customers/server/list-customer-choices";
+import { listCustomerChoices } from "@/features/customers";
 import { TyrePlanView } from "@/features/calibration/components/tyre-plan-view";
 import { isStaff } from "@/lib/authz/policy";
 

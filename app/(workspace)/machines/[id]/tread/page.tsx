@@ -2,7 +2,7 @@ import { notFound, redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getDb } from "@/db/client";
 import { getActor } from "@/features/auth/server/get-actor";
-import { isUuid } from "@/features/platform/server/found";
+import { isUuid } from "@/features/platform";
 import { CalibrationError } from "@/features/calibration/server/errors";
 import { calibrationKeys } from "@/features/calibration/api/calibration";
 import { TreadWorkbench } from "@/features/calibration/components/tread-workbench";
