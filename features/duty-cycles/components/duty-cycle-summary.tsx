@@ -39,7 +39,7 @@ export function DutyCycleSummary({ summary }: { summary: TDutyCycleSummary }) {
           label="Operating hours"
           value={
             summary.operatingHours === null
-              ? "per hour"
+              ? "1 h (typical)"
               : `${summary.operatingHours.toFixed(summary.operatingHours < 10 ? 2 : 1)} h`
           }
         />
