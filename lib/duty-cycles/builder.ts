@@ -5,7 +5,12 @@
  * operating hours, each on its own surface. Geometry: docs/duty-cycle-builder.md.
  */
 import type { TSurfaceKind } from "@/lib/scrub/schemas";
-import type { TStoredTurn, TStraight } from "@/lib/duty-cycles/stored-duty-cycle";
+import {
+  SPEED_BINS,
+  SPEED_BIN_WIDTH,
+  type TStoredTurn,
+  type TStraight,
+} from "@/lib/duty-cycles/stored-duty-cycle";
 
 export const HEADLAND_TURNS = ["loop", "bulb", "three-point"] as const;
 export type THeadlandTurn = (typeof HEADLAND_TURNS)[number];
@@ -68,6 +73,11 @@ export type TBuilderInput = {
 export type TBuiltDutyCycle = {
   turns: TStoredTurn[];
   straight: TStraight;
+  /**
+   * Seconds of one operating hour in each speed band, every block at its own speeds: the
+   * straight's one mean speed would put field work and road transport in one band between them.
+   */
+  speedSeconds: number[];
   /** Plain-language notes on choices the builder made (e.g. a loop that does not fit). */
   notes: string[];
 };
@@ -150,6 +160,8 @@ type BlockResult = {
   turns: Omit<TStoredTurn, "seq">[];
   straightDistance: number;
   straightSeconds: number;
+  /** Straight travel time split by speed: [m/s, s per hour of the block]. */
+  straightBySpeed: [number, number][];
   ladenDistance: number;
 };
 
@@ -185,6 +197,10 @@ function fieldBlock(b: TFieldBlock, rMin: number, notes: string[]): BlockResult 
     straightDistance,
     straightSeconds:
       turnsPerHour * (passSeconds + (turn.straight + turn.reverseStraight) / b.turnSpeed),
+    straightBySpeed: [
+      [b.workingSpeed, turnsPerHour * passSeconds],
+      [b.turnSpeed, (turnsPerHour * (turn.straight + turn.reverseStraight)) / b.turnSpeed],
+    ],
     ladenDistance: b.laden ? straightDistance + turnsPerHour * arcLength : 0,
   };
 }
@@ -225,6 +241,7 @@ function yardBlock(b: TYardBlock, rMin: number, notes: string[]): BlockResult {
     turns,
     straightDistance,
     straightSeconds: straightDistance / b.speed,
+    straightBySpeed: [[b.speed, straightDistance / b.speed]],
     ladenDistance: b.cyclesPerHour * ladenTurnDistance + straightDistance * ladenTurnShare,
   };
 }
@@ -257,6 +274,7 @@ function roadBlock(b: TRoadBlock, rMin: number, notes: string[]): BlockResult {
     turns,
     straightDistance,
     straightSeconds: straightDistance / b.speed,
+    straightBySpeed: [[b.speed, straightDistance / b.speed]],
     ladenDistance: b.laden ? distance : 0,
   };
 }
@@ -273,6 +291,11 @@ export function buildDutyCycle(input: TBuilderInput): TBuiltDutyCycle {
   let ladenDistance = 0;
   let totalDistance = 0;
   const surfaceDistance: Partial<Record<TSurfaceKind, number>> = {};
+  const speedSeconds = new Array<number>(SPEED_BINS).fill(0);
+  const addSeconds = (speed: number, seconds: number) => {
+    const bin = Math.min(SPEED_BINS - 1, Math.floor(Math.abs(speed) / SPEED_BIN_WIDTH));
+    speedSeconds[bin]! += seconds;
+  };
   for (const block of input.blocks) {
     const share = block.share / totalShare;
     const part =
@@ -284,10 +307,12 @@ export function buildDutyCycle(input: TBuilderInput): TBuiltDutyCycle {
     for (const t of part.turns) {
       if (t.perHour * share <= 0) continue;
       turns.push({ ...t, perHour: t.perHour * share, seq: turns.length + 1 });
+      addSeconds(t.speed, (t.duration ?? 0) * t.perHour * share);
       totalDistance += (t.distance ?? 0) * t.perHour * share;
     }
     straightDistance += part.straightDistance * share;
     straightSeconds += part.straightSeconds * share;
+    for (const [speed, seconds] of part.straightBySpeed) addSeconds(speed, seconds * share);
     ladenDistance += part.ladenDistance * share;
     totalDistance += part.straightDistance * share;
     surfaceDistance[block.surface] =
@@ -304,6 +329,7 @@ export function buildDutyCycle(input: TBuilderInput): TBuiltDutyCycle {
       surfaceShares: Object.keys(shares).length ? shares : { [input.blocks[0]!.surface]: 1 },
       ladenShare: totalDistance > 0 ? Math.min(1, ladenDistance / totalDistance) : 0,
     },
+    speedSeconds,
     notes,
   };
 }

@@ -1,7 +1,9 @@
 /**
  * A first guess at the column mapping from the header row and a few sample rows, for the
- * dealer to correct. Matching is by common words in column names; a guess never overrides a
- * template.
+ * dealer to correct. Matching is by common words in column names, in English and in the
+ * languages European telematics exports are commonly written in (German, French, Spanish,
+ * Italian, Dutch, Polish; everyday words of each language, from memory, no source). Names are
+ * compared without accents ("Länge" as "lange"); a guess never overrides a template.
  */
 import {
   ROLE_UNITS,
@@ -10,8 +12,15 @@ import {
   type TFileKind,
   type TUnit,
 } from "@/lib/duty-cycles/column-mapping";
+import { normaliseWord } from "@/lib/duty-cycles/normalise-word";
 
-type TRule = { role: TColumnRole; words: RegExp; unit?: (h: string) => TUnit | undefined };
+type TRule = {
+  role: TColumnRole;
+  words: RegExp;
+  /** Names that match `words` but mean something else ("vitesse de lacet" is a yaw rate). */
+  not?: RegExp;
+  unit?: (h: string) => TUnit | undefined;
+};
 
 const speedUnit = (h: string): TUnit | undefined =>
   /mph/.test(h) ? "mph" : /m\/?s\b|mps/.test(h) ? "m/s" : /km|kph/.test(h) ? "km/h" : undefined;
@@ -25,19 +34,56 @@ const timeUnit = (h: string): TUnit | undefined => (/\bms\b|millis/.test(h) ? "m
 const TELEMATICS_RULES: TRule[] = [
   {
     role: "time",
-    words: /^(time|timestamp|t|date.?time|zeit|secs?|seconds|utc)\b|time/,
+    words:
+      /^(time|timestamp|t|date.?time|zeit|secs?|seconds|utc|temps|heure|horodatage|tiempo|hora|tempo|ora|orario|tijd|czas|godzina)\b|time|zeitstempel|uhrzeit|tijdstip|znacznik.?czasu/,
+    not: /moteur|motor|compteur|contaore|horometro|draaiuren|motogodz|betriebsstunden|hour.?meter/,
     unit: timeUnit,
   },
-  { role: "speed", words: /speed|velocity|\bkph\b|\bmph\b|geschw|vitesse/, unit: speedUnit },
-  { role: "yawRate", words: /yaw|gyro|turn.?rate/, unit: rateUnit },
-  { role: "steer", words: /steer|wheel.?angle|lenk/, unit: angleUnit },
-  { role: "heading", words: /heading|course|compass|bearing|kurs/, unit: angleUnit },
-  { role: "lat", words: /^lat|latitude/ },
-  { role: "lon", words: /^(lon|lng)|longitude/ },
-  { role: "surface", words: /surface|ground|terrain/ },
-  { role: "load", words: /load|laden|payload/ },
-  { role: "direction", words: /gear|direction|fnr|shuttle/ },
-  { role: "hourMeter", words: /hour.?meter|engine.?hours|hobbs|\bhours\b/ },
+  {
+    role: "speed",
+    words:
+      /speed|velocity|\bkph\b|\bmph\b|geschw|vitesse|velocidad|velocita|snelheid|predkosc|szybkosc/,
+    not: /yaw|lacet|guinada|imbardata|gier|odchyl/,
+    unit: speedUnit,
+  },
+  {
+    role: "yawRate",
+    words: /yaw|gyro|turn.?rate|gierrate|drehrate|lacet|guinada|imbardata|giersnelheid|odchyl/,
+    unit: rateUnit,
+  },
+  {
+    role: "steer",
+    words:
+      /steer|wheel.?angle|lenk|braquage|angulo.?de.?direccion|angulo.?de.?giro|sterz|stuurhoek|skretu/,
+    unit: angleUnit,
+  },
+  {
+    role: "heading",
+    words: /heading|course|compass|bearing|kurs|\bcap\b|rumbo|rotta|prua|koers/,
+    unit: angleUnit,
+  },
+  { role: "lat", words: /^lat|latitud|breite|breedte|szerokosc/ },
+  { role: "lon", words: /^(lon|lng)|longitud|laenge|lange|lengte|dlugosc/ },
+  {
+    role: "surface",
+    words:
+      /surface|ground|terrain|untergrund|boden|oberflaeche|\bsol\b|superficie|suelo|terreno|suolo|ondergrond|bodem|podloze|nawierzchnia|grunt/,
+  },
+  {
+    role: "load",
+    words:
+      /load|laden|payload|beladung|zuladung|\blast\b|charge|carga|carico|lading|ladunek|obciazenie/,
+  },
+  {
+    role: "direction",
+    words:
+      /gear|direction|fnr|shuttle|fahrtrichtung|\bgang\b|sens.?de.?marche|\bmarche\b|\bmarcha\b|sentido|\bmarcia\b|rijrichting|versnelling|\bbieg\b|kierunek/,
+  },
+  {
+    role: "hourMeter",
+    words:
+      /hour.?meter|engine.?hours|hobbs|\bhours\b|betriebsstunden|motorstunden|heures.?moteur|compteur.?horaire|horas.?de.?motor|horometro|ore.?motore|contaore|draaiuren|urenteller|motogodz/,
+  },
 ];
 
 const SCHEDULE_RULES: TRule[] = [
@@ -88,9 +134,10 @@ export function guessColumns(
   const columns: TColumnMapping["columns"] = {};
   const taken = new Set<number>();
   for (const rule of rules) {
-    const index = headers.findIndex(
-      (h, i) => !taken.has(i) && rule.words.test(h.toLowerCase().trim()),
-    );
+    const index = headers.findIndex((h, i) => {
+      const name = normaliseWord(h);
+      return !taken.has(i) && rule.words.test(name) && !rule.not?.test(name);
+    });
     if (index < 0) continue;
     taken.add(index);
     const header = headers[index]!;

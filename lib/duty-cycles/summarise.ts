@@ -57,6 +57,7 @@ export function summariseDutyCycle({
   straight,
   operatingHours,
   speedHistogram,
+  speedSeconds,
   rowsUsed = 0,
   rowsSkipped = 0,
 }: {
@@ -64,6 +65,8 @@ export function summariseDutyCycle({
   straight: TStraight;
   operatingHours: number | null;
   speedHistogram?: TSpeedHistogram | null;
+  /** Seconds in each SPEED_BIN_WIDTH band, all moving (the builder's split by block). */
+  speedSeconds?: readonly number[];
   rowsUsed?: number;
   rowsSkipped?: number;
 }): TDutyCycleSummary {
@@ -89,7 +92,12 @@ export function summariseDutyCycle({
   if (straight.speed > 0)
     seconds[bin(straight.speed)]! += straight.distancePerHour / straight.speed;
   const measured = speedHistogram?.seconds;
-  const source = measured && measured.some((x) => x > 0) ? measured : seconds;
+  const source =
+    measured && measured.some((x) => x > 0)
+      ? measured
+      : speedSeconds && speedSeconds.some((x) => x > 0)
+        ? speedSeconds
+        : seconds;
   // Standing time says nothing about tyre wear in motion: shares are of moving time.
   const moving = source.reduce((s, x, i) => (i === 0 && measured ? s : s + x), 0);
   const binWidth = speedHistogram?.binWidth ?? SPEED_BIN_WIDTH;

@@ -36,4 +36,13 @@ export { DEFAULT_SURFACES } from "./surfaces";
 export { STANDING_CAUTIONS } from "./cautions";
 export * as ENGINE_COEFFICIENTS from "./coefficients";
 
-// Turn segmentation (added by its owner): export { segmentTurns } from "./segment-turns";
+// Turn detection in telematics logs (docs/turn-detection.md).
+export {
+  segmentTurns,
+  createTurnSegmenter,
+  wrapDegrees,
+  type TTurnSample,
+  type TDetectedTurn,
+  type TSegmentOptions,
+  type TTurnSegmenter,
+} from "./segment-turns";

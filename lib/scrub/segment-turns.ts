@@ -8,6 +8,7 @@
  * from above, ISO 8855 z up); compass heading and GPS bearing are clockwise from north; steer
  * angle is positive to the left. A negative speed means the machine is reversing.
  */
+import { fitHeadingRamp } from "./fit-heading-ramp";
 
 /**
  * One telematics sample: s, m/s (negative when reversing), deg/s, deg, deg, decimal degrees.
@@ -76,13 +77,19 @@ const DEFAULTS: Required<Omit<TSegmentOptions, "wheelbase">> = {
   minHeadingChange: 20,
   mergeGap: 1.5,
   maxGap: 10,
-  gpsBaseline: 2,
+  gpsBaseline: 4,
   gpsMinSpeed: 0.3,
   pivotSpeed: 0.15,
   pivotRadius: 0.3,
 };
 
 const DEG = Math.PI / 180;
+/** Course points closer than this share of the GPS baseline are thinned out before fitting. */
+const COURSE_POINT_SPACING = 1 / 8;
+/** Run-in and run-out kept around a GPS turn for the arc fit, in GPS baselines. */
+const FIT_MARGIN = 3;
+/** Positions kept for the GPS course chord; at very slow speed the chord is simply shorter. */
+const POSITION_RING = 512;
 const EARTH_RADIUS = 6_371_008.8; // mean Earth radius (m), IUGG
 
 /** Wraps an angle difference to [-180, 180). */
@@ -104,6 +111,17 @@ type Step = {
   laden?: boolean;
   /** First step after a gap or the start of the log. */
   restart: boolean;
+  /** Distance travelled since the log began (m), the scale of `courseS`. */
+  s: number;
+  /**
+   * A GPS course point: course of the chord ending at this sample (deg, left positive,
+   * unwrapped), placed at the chord's midpoint in distance and time. NaN when there is none.
+   */
+  courseS: number;
+  coursePsi: number;
+  courseT: number;
+  /** Length of that chord along the path (m). */
+  courseC: number;
 };
 
 /** Turns raw samples into heading and distance increments, one source picked per sample. */
@@ -115,11 +133,22 @@ class HeadingTracker {
   private prevSpeed = NaN;
   private prevRate = NaN;
   private prevPsi = NaN;
-  private anchor: { x: number; y: number; reverse: boolean } | undefined;
   private gpsPsi = NaN;
   private lat0 = NaN;
   private lon0 = NaN;
   private cosLat0 = NaN;
+  private sTotal = 0;
+  private lastPointS = -Infinity;
+  // Recent fixes for the course chord, in rings indexed by a running count: [back, next).
+  private readonly px = new Float64Array(POSITION_RING);
+  private readonly py = new Float64Array(POSITION_RING);
+  private readonly ps = new Float64Array(POSITION_RING);
+  private readonly pt = new Float64Array(POSITION_RING);
+  private back = 0;
+  private next = 0;
+  /** The fix at or just before the latest chord's midpoint. */
+  private mid = 0;
+  private ringReverse = false;
 
   constructor(
     private readonly o: Required<Omit<TSegmentOptions, "wheelbase">> & { wheelbase?: number },
@@ -134,8 +163,31 @@ class HeadingTracker {
     return NaN;
   }
 
-  /** Unwrapped GPS course (deg, left positive), or NaN before there is one. */
-  private gpsHeading(s: TTurnSample, speed: number, reverse: boolean): number {
+  private clearFixes() {
+    this.back = this.next;
+  }
+
+  /** When the machine had travelled `s` (within the kept fixes), from the fixes either side. */
+  private timeAt(s: number): number {
+    const m = POSITION_RING - 1;
+    if (this.mid < this.back) this.mid = this.back;
+    while (this.mid + 1 < this.next - 1 && this.ps[(this.mid + 1) & m]! <= s) this.mid++;
+    const i = this.mid & m;
+    const k = (this.mid + 1) & m;
+    const span = this.ps[k]! - this.ps[i]!;
+    return span > 0
+      ? this.pt[i]! + ((this.pt[k]! - this.pt[i]!) * (s - this.ps[i]!)) / span
+      : this.pt[i]!;
+  }
+
+  /**
+   * Unwrapped GPS course (deg, left positive), or NaN before there is one. The course at each
+   * fix is that of the chord back to the latest earlier fix at least a baseline away: on a
+   * circle a chord points along the tangent at its midpoint, so the course is exact there, and
+   * receiver noise is divided by the baseline rather than by the step between fixes. The
+   * chord's midpoint also becomes a course point for the arc fit.
+   */
+  private gpsHeading(s: TTurnSample, speed: number, reverse: boolean, out: Step): number {
     if (s.lat === undefined || s.lon === undefined) return NaN;
     if (!Number.isFinite(s.lat) || !Number.isFinite(s.lon)) return NaN;
     if (Number.isNaN(this.lat0)) {
@@ -143,32 +195,53 @@ class HeadingTracker {
       this.lon0 = s.lon;
       this.cosLat0 = Math.cos(s.lat * DEG);
     }
+    // Creeping or standing, receiver wander is no course; a change between forward and reverse
+    // starts afresh, as mixing both would give a course that is neither.
+    if (Math.abs(speed) < this.o.gpsMinSpeed || reverse !== this.ringReverse) {
+      this.clearFixes();
+      this.ringReverse = reverse;
+      if (Math.abs(speed) < this.o.gpsMinSpeed) return this.gpsPsi;
+    }
     // Local east/north plane: plenty accurate over the few metres of the course baseline.
     const x = (s.lon - this.lon0) * DEG * EARTH_RADIUS * this.cosLat0;
     const y = (s.lat - this.lat0) * DEG * EARTH_RADIUS;
-    // A change of direction starts a new baseline: mixing forward and reverse travel would
-    // give a course that is neither.
-    if (!this.anchor || this.anchor.reverse !== reverse) {
-      this.anchor = { x, y, reverse };
-      return this.gpsPsi;
+    const m = POSITION_RING - 1;
+    if (this.next - this.back >= POSITION_RING) this.back++;
+    const k = this.next & m;
+    this.px[k] = x;
+    this.py[k] = y;
+    this.ps[k] = this.sTotal;
+    this.pt[k] = s.t;
+    this.next++;
+    const base2 = this.o.gpsBaseline ** 2;
+    const far = (j: number) => {
+      const dx = x - this.px[j & m]!;
+      const dy = y - this.py[j & m]!;
+      return dx * dx + dy * dy >= base2;
+    };
+    while (this.back + 1 < this.next - 1 && far(this.back + 1)) this.back++;
+    if (this.back >= this.next - 1 || !far(this.back)) return this.gpsPsi;
+    const j = this.back & m;
+    // Course of travel, counter-clockwise from east; the machine points the other way in reverse.
+    let psi = Math.atan2(y - this.py[j]!, x - this.px[j]!) / DEG + (reverse ? 180 : 0);
+    if (!Number.isNaN(this.gpsPsi)) psi = this.gpsPsi + wrapDegrees(psi - this.gpsPsi);
+    this.gpsPsi = psi;
+    const mid = (this.ps[j]! + this.sTotal) / 2;
+    if (mid - this.lastPointS >= this.o.gpsBaseline * COURSE_POINT_SPACING) {
+      this.lastPointS = mid;
+      out.courseS = mid;
+      out.coursePsi = psi;
+      out.courseT = this.timeAt(mid);
+      out.courseC = this.sTotal - this.ps[j]!;
     }
-    const dx = x - this.anchor.x;
-    const dy = y - this.anchor.y;
-    if (Math.abs(speed) >= this.o.gpsMinSpeed && dx * dx + dy * dy >= this.o.gpsBaseline ** 2) {
-      // Course of travel, counter-clockwise from east; the machine points the other way in reverse.
-      let psi = Math.atan2(dy, dx) / DEG + (reverse ? 180 : 0);
-      if (!Number.isNaN(this.gpsPsi)) psi = this.gpsPsi + wrapDegrees(psi - this.gpsPsi);
-      this.gpsPsi = psi;
-      this.anchor = { x, y, reverse };
-    }
-    return this.gpsPsi;
+    return psi;
   }
 
   reset() {
     this.hasPrev = false;
     this.prevRate = NaN;
     this.prevPsi = NaN;
-    this.anchor = undefined;
+    this.clearFixes();
     this.gpsPsi = NaN;
   }
 
@@ -183,6 +256,11 @@ class HeadingTracker {
     surface: undefined,
     laden: undefined,
     restart: true,
+    s: 0,
+    courseS: NaN,
+    coursePsi: NaN,
+    courseT: NaN,
+    courseC: NaN,
   };
 
   step(s: TTurnSample): Step {
@@ -193,6 +271,12 @@ class HeadingTracker {
       this.reset();
       restart = true;
     }
+    const out = this.out;
+    out.courseS = out.coursePsi = out.courseT = NaN;
+    const ds = restart
+      ? 0
+      : (Math.abs(this.prevSpeed) + Math.abs(speed)) * 0.5 * (s.t - this.prevT);
+    this.sTotal += ds;
     const rate = this.rateOf(s, speed);
     const hasRate = !Number.isNaN(rate);
     // Absolute heading (compass, then GPS), left positive and unwrapped; only needed when
@@ -202,21 +286,19 @@ class HeadingTracker {
       if (s.heading !== undefined && Number.isFinite(s.heading)) {
         const h = -s.heading;
         psi = Number.isNaN(this.prevPsi) ? h : this.prevPsi + wrapDegrees(h - this.prevPsi);
-      } else psi = this.gpsHeading(s, speed, reverse);
-    } else this.anchor = undefined;
+      } else psi = this.gpsHeading(s, speed, reverse, out);
+    } else this.clearFixes();
     const dt = restart ? 0 : s.t - this.prevT;
     let dPsi = 0;
     if (!restart) {
       if (hasRate) dPsi = ((Number.isNaN(this.prevRate) ? rate : this.prevRate) + rate) * 0.5 * dt;
       else if (!Number.isNaN(psi) && !Number.isNaN(this.prevPsi)) dPsi = psi - this.prevPsi;
     }
-    const ds = restart ? 0 : (Math.abs(this.prevSpeed) + Math.abs(speed)) * 0.5 * dt;
     this.hasPrev = true;
     this.prevT = s.t;
     this.prevSpeed = speed;
     this.prevRate = rate;
     this.prevPsi = psi;
-    const out = this.out;
     out.t = s.t;
     out.dt = dt;
     out.dPsi = dPsi;
@@ -226,6 +308,7 @@ class HeadingTracker {
     out.surface = s.surface;
     out.laden = s.laden;
     out.restart = restart;
+    out.s = this.sTotal;
     return out;
   }
 }
@@ -240,6 +323,11 @@ class StepRing {
   dPsi = new Float64Array(64);
   ds = new Float64Array(64);
   dsReverse = new Float64Array(64);
+  s = new Float64Array(64);
+  courseS = new Float64Array(64);
+  coursePsi = new Float64Array(64);
+  courseT = new Float64Array(64);
+  courseC = new Float64Array(64);
   surface: (string | undefined)[] = new Array(64);
   laden = new Int8Array(64); // -1 unknown, 0 unladen, 1 laden
   mask = 63;
@@ -259,6 +347,11 @@ class StepRing {
     this.dPsi = grow(this.dPsi, (n) => new Float64Array(n));
     this.ds = grow(this.ds, (n) => new Float64Array(n));
     this.dsReverse = grow(this.dsReverse, (n) => new Float64Array(n));
+    this.s = grow(this.s, (n) => new Float64Array(n));
+    this.courseS = grow(this.courseS, (n) => new Float64Array(n));
+    this.coursePsi = grow(this.coursePsi, (n) => new Float64Array(n));
+    this.courseT = grow(this.courseT, (n) => new Float64Array(n));
+    this.courseC = grow(this.courseC, (n) => new Float64Array(n));
     this.laden = grow(this.laden, (n) => new Int8Array(n));
     const surface = new Array<string | undefined>(size);
     for (let i = from; i < from + this.mask + 1; i++)
@@ -277,14 +370,77 @@ type OpenTurn = {
   ds: number[];
   dsReverse: number[];
   rate: number[];
+  /** Distance at each step (m). */
+  s: number[];
+  /** GPS course points of the turn with its run-in (and, once ended, its run-out). */
+  course: CoursePoints;
   surface: string | undefined;
   laden: number;
   /** Number of steps up to and including the last one that was still turning. */
   activeLen: number;
+  /** Heading change over those steps (deg), and over all steps appended so far. */
+  psi: number;
+  psiAll: number;
   quietSince: number | undefined;
 };
 
+/** GPS course points: distance (m), course (deg), time (s), chord (m), in order of distance. */
+type CoursePoints = { s: number[]; psi: number[]; t: number[]; chord: number[] };
+
+/**
+ * The latest course points, for the run-in of a turn that opens: bounded, oldest dropped.
+ * Points before `floor` belong to the previous turn and are not handed on.
+ */
+class CourseHistory {
+  private readonly size = 256;
+  private readonly s = new Float64Array(this.size);
+  private readonly psi = new Float64Array(this.size);
+  private readonly t = new Float64Array(this.size);
+  private readonly chord = new Float64Array(this.size);
+  private count = 0;
+  floor = -Infinity;
+
+  push(r: StepRing, k: number) {
+    const i = this.count % this.size;
+    this.s[i] = r.courseS[k]!;
+    this.psi[i] = r.coursePsi[k]!;
+    this.t[i] = r.courseT[k]!;
+    this.chord[i] = r.courseC[k]!;
+    this.count++;
+  }
+
+  clear() {
+    this.count = 0;
+    this.floor = -Infinity;
+  }
+
+  /** Points from distance `from` onwards (and after the floor), oldest first. */
+  since(from: number): CoursePoints {
+    const out: CoursePoints = { s: [], psi: [], t: [], chord: [] };
+    const first = Math.max(0, this.count - this.size);
+    let i = this.count;
+    while (i > first && this.s[(i - 1) % this.size]! >= Math.max(from, this.floor)) i--;
+    for (; i < this.count; i++) {
+      const k = i % this.size;
+      out.s.push(this.s[k]!);
+      out.psi.push(this.psi[k]!);
+      out.t.push(this.t[k]!);
+      out.chord.push(this.chord[k]!);
+    }
+    return out;
+  }
+}
+
 /** The value |rate| exceeds for the top tenth of the turn's steps: its plateau level. */
+function addCoursePoint(into: CoursePoints, r: StepRing, k: number) {
+  const s = r.courseS[k]!;
+  if (Number.isNaN(s)) return;
+  into.s.push(s);
+  into.psi.push(r.coursePsi[k]!);
+  into.t.push(r.courseT[k]!);
+  into.chord.push(r.courseC[k]!);
+}
+
 function plateauRate(rates: readonly number[], n: number): number {
   // A typed array sorts numerically without a comparator call per pair.
   const sorted = new Float64Array(n);
@@ -320,6 +476,9 @@ class Segmenter implements TTurnSegmenter {
   private winPsi = 0;
   private winDt = 0;
   private open: OpenTurn | undefined;
+  /** A GPS turn that has ended, still collecting its run-out for the arc fit. */
+  private pending: { turn: OpenTurn; untilS: number; untilT: number } | undefined;
+  private readonly history = new CourseHistory();
   private out: TDetectedTurn[] = [];
 
   constructor(
@@ -340,6 +499,11 @@ class Segmenter implements TTurnSegmenter {
     r.dPsi[k] = step.dPsi;
     r.ds[k] = step.ds;
     r.dsReverse[k] = step.dsReverse;
+    r.s[k] = step.s;
+    r.courseS[k] = step.courseS;
+    r.coursePsi[k] = step.coursePsi;
+    r.courseT[k] = step.courseT;
+    r.courseC[k] = step.courseC;
     r.surface[k] = step.surface;
     r.laden[k] = step.laden === undefined ? -1 : step.laden ? 1 : 0;
     this.tail++;
@@ -383,8 +547,10 @@ class Segmenter implements TTurnSegmenter {
   /** A gap in the log: finish the stretch before it, so no window spans the gap. */
   private restart() {
     this.drain(true);
-    if (this.open) this.close(this.open);
+    if (this.open) this.end(this.open);
     this.open = undefined;
+    this.settlePending();
+    this.history.clear();
     this.lo = this.hi = this.head = this.tail;
     this.winPsi = this.winDt = 0;
   }
@@ -397,31 +563,40 @@ class Segmenter implements TTurnSegmenter {
     turn.ds.push(r.ds[k]!);
     turn.dsReverse.push(r.dsReverse[k]!);
     turn.rate.push(rate);
+    turn.psiAll += r.dPsi[k]!;
+    turn.s.push(r.s[k]!);
+    addCoursePoint(turn.course, r, k);
   }
 
   private classify(k: number, rate: number) {
     const o = this.o;
+    const r = this.ring;
     const turning = Math.abs(rate) >= o.yawThreshold;
     const sign = Math.sign(rate);
+    if (!Number.isNaN(r.courseS[k]!)) this.history.push(r, k);
+    this.feedPending(k);
     const open = this.open;
     if (open) {
       if (turning && sign === open.sign) {
         this.append(open, k, rate);
         open.activeLen = open.t.length;
         open.quietSince = undefined;
+        open.psi = open.psiAll;
+        // A real next turn is under way: its course is no run-out for the one before.
+        if (Math.abs(open.psi) >= o.minHeadingChange / 2) this.settlePending();
         return;
       }
       if (!turning) {
         open.quietSince ??= open.t[open.activeLen - 1]!;
-        if (this.ring.t[k]! - open.quietSince <= o.mergeGap) {
+        if (r.t[k]! - open.quietSince <= o.mergeGap) {
           this.append(open, k, rate);
           return;
         }
       }
-      this.close(open);
+      this.end(open);
       this.open = undefined;
     }
-    if (turning && this.ring.dt[k]! > 0) {
+    if (turning && r.dt[k]! > 0) {
       const turn: OpenTurn = {
         sign,
         t: [],
@@ -430,14 +605,54 @@ class Segmenter implements TTurnSegmenter {
         ds: [],
         dsReverse: [],
         rate: [],
-        surface: this.ring.surface[k],
-        laden: this.ring.laden[k]!,
+        s: [],
+        course: this.history.since(r.s[k]! - o.gpsBaseline * FIT_MARGIN),
+        surface: r.surface[k],
+        laden: r.laden[k]!,
         activeLen: 1,
+        psi: 0,
+        psiAll: 0,
         quietSince: undefined,
       };
       this.append(turn, k, rate);
+      turn.psi = turn.psiAll;
       this.open = turn;
     }
+  }
+
+  /** An ended turn: GPS turns wait for their run-out, the rest are measured now. */
+  private end(turn: OpenTurn) {
+    // Output stays in order: the turn before this one is measured first.
+    this.settlePending();
+    // Too small to be a turn (receiver noise, a lane change): gone, and no bound on run-ins.
+    if (Math.abs(turn.psi) < this.o.minHeadingChange) return;
+    const lastS = turn.s[turn.activeLen - 1]!;
+    // The next turn's run-in starts after this one.
+    this.history.floor = lastS;
+    if (turn.course.s.length === 0) return this.close(turn);
+    const lastT = turn.t[turn.activeLen - 1]!;
+    this.pending = {
+      turn,
+      // Course points sit half a chord behind the machine: run on that far again.
+      untilS: lastS + this.o.gpsBaseline * (FIT_MARGIN + 0.5),
+      untilT: lastT + this.o.maxGap,
+    };
+  }
+
+  /** Hands a step's course point to the pending turn until it has its run-out. */
+  private feedPending(k: number) {
+    const p = this.pending;
+    if (!p) return;
+    const r = this.ring;
+    addCoursePoint(p.turn.course, r, k);
+    if (r.s[k]! >= p.untilS || r.t[k]! >= p.untilT) this.settlePending();
+  }
+
+  private settlePending() {
+    const p = this.pending;
+    if (!p) return;
+    this.pending = undefined;
+    this.close(p.turn);
   }
 
   private close(turn: OpenTurn) {
@@ -445,8 +660,7 @@ class Segmenter implements TTurnSegmenter {
     const n = turn.activeLen;
     let psi = 0;
     for (let i = 0; i < n; i++) psi += turn.dPsi[i]!;
-    const headingChange = Math.abs(psi);
-    if (headingChange < o.minHeadingChange || n === 0) return;
+    if (Math.abs(psi) < o.minHeadingChange || n === 0) return;
     // Smoothing spreads a turn's edges by half a window each side. For a steady turn the smoothed
     // rate crosses half its plateau where the turn really starts and ends, so distance, duration
     // and radius come from that core; the heading change sums the whole window (nothing lost).
@@ -461,8 +675,14 @@ class Segmenter implements TTurnSegmenter {
       dist += turn.ds[i]!;
       distRev += turn.dsReverse[i]!;
     }
-    const start = turn.t[first]! - turn.dt[first]!;
-    const end = turn.t[last]!;
+    let start = turn.t[first]! - turn.dt[first]!;
+    let end = turn.t[last]!;
+    let headingChange = Math.abs(psi);
+    const arc = this.fitGpsArc(turn, turn.s[first]! - turn.ds[first]!, turn.s[last]!, psi);
+    if (arc) {
+      ({ start, end, headingChange } = arc);
+      dist = arc.distance;
+    }
     const duration = end - start;
     const speed = duration > 0 ? dist / duration : 0;
     let radius = dist / (headingChange * DEG);
@@ -482,6 +702,44 @@ class Segmenter implements TTurnSegmenter {
       ...(turn.laden >= 0 ? { laden: turn.laden === 1 } : {}),
     });
   }
+
+  /**
+   * Arc of a GPS turn from its course points (docs/turn-detection.md): the detector's core,
+   * taken from a course that trails the machine by half a baseline, seeds the fit. Undefined
+   * when the turn has no run-in or run-out to fit against, or the fit disagrees with the sum.
+   */
+  private fitGpsArc(turn: OpenTurn, coreStart: number, coreEnd: number, psiSum: number) {
+    const c = turn.course;
+    const n = c.s.length;
+    if (n === 0) return undefined;
+    const lag = this.o.gpsBaseline / 2;
+    const a0 = coreStart - lag;
+    const b0 = coreEnd - lag;
+    const reach = Math.max(this.o.gpsBaseline, 0.3 * (b0 - a0));
+    const fit = fitHeadingRamp({ ...c, length: n }, { a: a0, b: b0, reach });
+    if (!fit) return undefined;
+    const dPsi = fit.psi1 - fit.psi0;
+    if (Math.sign(dPsi) !== Math.sign(psiSum) || Math.abs(dPsi) < this.o.minHeadingChange) {
+      return undefined;
+    }
+    return {
+      start: interpolate(c.s, c.t, fit.a),
+      end: interpolate(c.s, c.t, fit.b),
+      headingChange: Math.abs(dPsi),
+      distance: fit.b - fit.a,
+    };
+  }
+}
+
+/** y at x on the polyline (xs ascending, at least one point), straight on past either end. */
+function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {
+  const n = xs.length;
+  if (n === 1) return ys[0]!;
+  let i = 1;
+  while (i < n - 1 && xs[i]! < x) i++;
+  const x0 = xs[i - 1]!;
+  const x1 = xs[i]!;
+  return x1 > x0 ? ys[i - 1]! + ((ys[i]! - ys[i - 1]!) * (x - x0)) / (x1 - x0) : ys[i]!;
 }
 
 /** Detects the turns in a whole log held in memory. */

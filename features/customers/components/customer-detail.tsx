@@ -56,6 +56,12 @@ export function CustomerDetail({
             >
               Run an estimate
             </Link>
+            <Link
+              href={`/duty-cycles/build?customerId=${c.id}`}
+              className="inline-flex h-9 items-center rounded-md border border-ink-300 bg-white px-3 text-sm font-medium text-ink-800 hover:bg-ink-100"
+            >
+              Build a duty cycle
+            </Link>
             <DeleteButton
               what={c.name}
               consequences="Its sites, machines, duty cycles and estimates are deleted with it. This cannot be undone."

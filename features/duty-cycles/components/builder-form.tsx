@@ -22,7 +22,7 @@ import { Field } from "@/lib/ui/field";
 import { Input, Select } from "@/lib/ui/input";
 import { toast } from "@/lib/ui/toast";
 import { useCreateDutyCycle } from "@/features/duty-cycles/api/duty-cycles";
-import { ZBuilderInput } from "@/features/duty-cycles/schemas/builder";
+import { formatShare, sharesTotal, ZBuilderInput } from "@/features/duty-cycles/schemas/builder";
 import { NameAndCustomer } from "@/features/duty-cycles/components/name-and-customer";
 import { DutyCycleSummary } from "@/features/duty-cycles/components/duty-cycle-summary";
 
@@ -287,11 +287,22 @@ function BlockEditor({
 }
 
 /** Builds a duty cycle from the work itself when the customer has no telematics log. */
-export function BuilderForm({ customers }: { customers: { id: string; name: string }[] }) {
+export function BuilderForm({
+  customers,
+  initialCustomerId,
+}: {
+  customers: { id: string; name: string }[];
+  /** The customer being worked on (from the customer page), else the first. */
+  initialCustomerId?: string;
+}) {
   const router = useRouter();
   const [input, setInput] = useState<TBuilderInput>(structuredClone(BUILDER_PRESETS[0]!.input));
   const [name, setName] = useState(BUILDER_PRESETS[0]!.name);
-  const [customerId, setCustomerId] = useState(customers[0]?.id ?? "");
+  const [customerId, setCustomerId] = useState(
+    customers.find((c) => c.id === initialCustomerId)?.id ?? customers[0]?.id ?? "",
+  );
+  const total = sharesTotal(input.blocks);
+  const sharesOff = Math.abs(total - 1) > 0.0005;
   const create = useCreateDutyCycle();
   const parsed = ZBuilderInput.safeParse(input);
   const preview = useMemo(() => {
@@ -304,6 +315,7 @@ export function BuilderForm({ customers }: { customers: { id: string; name: stri
           turns: built.turns,
           straight: built.straight,
           operatingHours: null,
+          speedSeconds: built.speedSeconds,
         }),
       };
     } catch {
@@ -372,6 +384,14 @@ export function BuilderForm({ customers }: { customers: { id: string; name: stri
               }
             />
           ))}
+          <p
+            role="status"
+            data-testid="shares-total"
+            className={sharesOff ? "text-sm font-medium text-danger-700" : "text-sm text-ink-700"}
+          >
+            Shares of the operating hours add up to {formatShare(total)}
+            {sharesOff ? " — they must add up to 100 %." : "."}
+          </p>
           <div className="flex flex-wrap gap-2">
             {(["field", "yard", "road"] as const).map((k) => (
               <Button

@@ -1,5 +1,7 @@
 "use client";
 
+import Link from "next/link";
+import { formatPerHour } from "@/lib/format/format";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/lib/ui/button";
@@ -51,9 +53,19 @@ export function DutyCycleDetail({ id, canWrite }: { id: string; canWrite: boolea
           </p>
         </div>
         {canWrite ? (
-          <Button variant="danger" size="sm" onClick={() => setConfirming(true)}>
-            Delete
-          </Button>
+          <div className="flex flex-wrap gap-2">
+            {cycle.status === "ready" ? (
+              <Link
+                href={`/estimates/new?customerId=${cycle.customerId}&dutyCycleId=${cycle.id}`}
+                className="inline-flex h-9 items-center rounded-md bg-furrow-600 px-3 text-sm font-medium text-white hover:bg-furrow-700"
+              >
+                Run an estimate with this duty cycle
+              </Link>
+            ) : null}
+            <Button variant="danger" size="sm" onClick={() => setConfirming(true)}>
+              Delete
+            </Button>
+          </div>
         ) : null}
       </header>
 
@@ -168,7 +180,7 @@ export function DutyCycleDetail({ id, canWrite }: { id: string; canWrite: boolea
                     </td>
                     <td className="px-3 py-1.5">{t.headingChange.toFixed(0)}</td>
                     <td className="px-3 py-1.5">{(t.speed * 3.6).toFixed(1)}</td>
-                    <td className="px-3 py-1.5">{t.perHour.toFixed(2)}</td>
+                    <td className="px-3 py-1.5">{formatPerHour(t.perHour)}</td>
                     <td className="px-3 py-1.5">{SURFACE_LABELS[t.surface]}</td>
                     <td className="px-3 py-1.5">{t.loadState}</td>
                     <td className="px-3 py-1.5">{t.reverse ? "yes" : ""}</td>

@@ -2,6 +2,7 @@
 
 import type { TDutyCycleSummary } from "@/lib/duty-cycles/summarise";
 import { SURFACE_LABELS } from "@/lib/duty-cycles/surface-names";
+import { formatPerHour } from "@/lib/format/format";
 import { SummaryBarChart } from "@/features/duty-cycles/components/summary-bar-chart";
 
 function Figure({ label, value }: { label: string; value: string }) {
@@ -39,7 +40,7 @@ export function DutyCycleSummary({ summary }: { summary: TDutyCycleSummary }) {
           label="Operating hours"
           value={
             summary.operatingHours === null
-              ? "per hour"
+              ? "1 h (typical)"
               : `${summary.operatingHours.toFixed(summary.operatingHours < 10 ? 2 : 1)} h`
           }
         />
@@ -48,7 +49,7 @@ export function DutyCycleSummary({ summary }: { summary: TDutyCycleSummary }) {
           value={`${(summary.distancePerHour / 1000).toFixed(2)} km`}
         />
         <Figure label="Time turning" value={`${(summary.turningShare * 100).toFixed(1)} %`} />
-        <Figure label="Turns per hour" value={summary.turnsPerHour.toFixed(1)} />
+        <Figure label="Turns per hour" value={formatPerHour(summary.turnsPerHour)} />
       </dl>
       {summary.operatingHours !== null ? (
         <p className="text-sm text-ink-700">

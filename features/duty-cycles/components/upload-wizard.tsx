@@ -11,6 +11,7 @@ import {
   type TFileKind,
 } from "@/lib/duty-cycles/column-mapping";
 import { guessColumns, guessDecimal, guessKind } from "@/lib/duty-cycles/guess-mapping";
+import { detectEncoding, ENCODING_DETECTED_NOTE } from "@/lib/duty-cycles/detect-encoding";
 import { SURFACE_LABELS } from "@/lib/duty-cycles/surface-names";
 import { Button } from "@/lib/ui/button";
 import { Card } from "@/lib/ui/card";
@@ -63,6 +64,7 @@ export function UploadWizard({
   const [mapping, setMapping] = useState<TColumnMapping>(initialMapping("telematics"));
   const [preview, setPreview] = useState<TPreview | null>(null);
   const [previewError, setPreviewError] = useState<string | null>(null);
+  const [encodingDetected, setEncodingDetected] = useState(false);
   const [progress, setProgress] = useState(0);
   const [name, setName] = useState("");
   const [customerId, setCustomerId] = useState(customers[0]?.id ?? "");
@@ -123,8 +125,18 @@ export function UploadWizard({
   const uploaded = upload.data;
 
   function chooseFile(f: File | null) {
-    setFile(f);
     setPreview(null);
+    setEncodingDetected(false);
+    if (f) {
+      // Detect the encoding before the first preview, so headers never show as "L�nge".
+      const head = f.slice(0, 65536);
+      void head.arrayBuffer().then((bytes) => {
+        const encoding = detectEncoding(new Uint8Array(bytes), { complete: f.size <= 65536 });
+        setEncodingDetected(encoding === "latin1");
+        setMapping((m) => ({ ...m, encoding }));
+        setFile(f);
+      });
+    } else setFile(f);
     setProgress(0);
     upload.reset();
     if (!f) return;
@@ -227,6 +239,13 @@ export function UploadWizard({
 
       {preview && preview.rows.length > 0 ? (
         <Card title="2. Map the columns">
+          {encodingDetected && mapping.encoding === "latin1" ? (
+            <div className="mb-4">
+              <Caution title="Text encoding detected" tone="info">
+                {ENCODING_DETECTED_NOTE}
+              </Caution>
+            </div>
+          ) : null}
           <div className="mb-4 grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
             <Field label="Field separator">
               <Select value={delimiterChoice} onChange={(e) => setDelimiterChoice(e.target.value)}>
@@ -254,12 +273,13 @@ export function UploadWizard({
             <Field label="Text encoding">
               <Select
                 value={mapping.encoding}
-                onChange={(e) =>
-                  setMapping((m) => ({ ...m, encoding: e.target.value as "utf-8" | "latin1" }))
-                }
+                onChange={(e) => {
+                  setEncodingDetected(false);
+                  setMapping((m) => ({ ...m, encoding: e.target.value as "utf-8" | "latin1" }));
+                }}
               >
                 <option value="utf-8">UTF-8</option>
-                <option value="latin1">Latin-1 (older Windows exports)</option>
+                <option value="latin1">Latin-1 / Windows-1252 (older Windows exports)</option>
               </Select>
             </Field>
             <Field label="First row">

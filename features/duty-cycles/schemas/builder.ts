@@ -64,8 +64,24 @@ export const ZBuilderInput = z
       .min(1)
       .max(8),
   })
-  .refine((b) => b.blocks.reduce((s, x) => s + x.share, 0) > 0, {
-    message: "Give at least one block a share of the hours.",
-    path: ["blocks"],
+  .superRefine((b, ctx) => {
+    const total = sharesTotal(b.blocks);
+    // Half a tenth of a percent covers rounding in the form's percent fields.
+    if (Math.abs(total - 1) > 0.0005)
+      ctx.addIssue({
+        code: "custom",
+        message: `The blocks' shares of the operating hours add up to ${formatShare(total)}; make them add up to 100 %.`,
+        path: ["blocks"],
+      });
   });
+
+/** Sum of the blocks' shares of the hours (1 = 100 %). */
+export function sharesTotal(blocks: readonly { share: number }[]): number {
+  return blocks.reduce((s, x) => s + (Number.isFinite(x.share) ? x.share : 0), 0);
+}
+
+/** A share as the form shows it: "115 %", "99.5 %". */
+export function formatShare(share: number): string {
+  return `${Math.round(share * 1000) / 10} %`;
+}
 export type TBuilderInputForm = z.input<typeof ZBuilderInput>;

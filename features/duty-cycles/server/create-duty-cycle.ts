@@ -51,6 +51,7 @@ export async function createDutyCycle({
       turns: built.turns,
       straight: built.straight,
       operatingHours: null,
+      speedSeconds: built.speedSeconds,
     });
     const row = await db.transaction(async (tx) => {
       const [created] = await tx

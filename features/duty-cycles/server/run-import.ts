@@ -1,6 +1,7 @@
 // Runs in the worker process (scripts/worker.ts), so no "server-only" marker.
 import { createReadStream } from "node:fs";
 import { open } from "node:fs/promises";
+import { Readable } from "node:stream";
 import { and, eq } from "drizzle-orm";
 import type { Db, DbOrTx } from "@/db/client";
 import { dutyCycleImportErrors, dutyCycles, dutyCycleTurns, dutyCycleUploads } from "@/db/schema";
@@ -67,10 +68,8 @@ async function parseUpload(
     mapping.kind === "telematics"
       ? createTelematicsImporter(mapping)
       : createScheduleImporter(mapping);
-  const input = createReadStream(file, {
-    encoding: mapping.encoding === "latin1" ? "latin1" : "utf8",
-    highWaterMark: 256 * 1024,
-  });
+  const raw = createReadStream(file, { highWaterMark: 256 * 1024 });
+  const input = decodeText(raw, mapping.encoding);
   let read = 0;
   let last = 0;
   input.on("data", (chunk) => {
@@ -232,4 +231,25 @@ export async function runImport({
   } finally {
     clearInterval(heartbeat);
   }
+}
+
+/**
+ * Bytes to text as the browser preview read them: "latin1" is Windows-1252 (the WHATWG
+ * Encoding Standard's meaning of the label, a superset of ISO-8859-1 with € and curly quotes).
+ */
+function decodeText(raw: Readable, encoding: "utf-8" | "latin1"): Readable {
+  const decoder = new TextDecoder(encoding === "latin1" ? "windows-1252" : "utf-8");
+  const decoded = Readable.from(
+    (async function* () {
+      for await (const chunk of raw) {
+        const text = decoder.decode(chunk as Buffer, { stream: true });
+        if (text) yield text;
+      }
+      const rest = decoder.decode();
+      if (rest) yield rest;
+    })(),
+  );
+  // Byte counts for the progress bar come from the raw stream.
+  decoded.on("close", () => raw.destroy());
+  return decoded;
 }

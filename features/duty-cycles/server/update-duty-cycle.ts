@@ -59,6 +59,7 @@ export async function updateDutyCycle({
                   turns: built.turns,
                   straight: built.straight,
                   operatingHours: null,
+                  speedSeconds: built.speedSeconds,
                 }),
                 notes: built.notes,
               },

@@ -8,7 +8,13 @@ import { radiusBands } from "@/features/estimates/lib/radius-bands";
 import { formatQuantity, fromSi, unitLabel, type TUnitSystem } from "@/lib/format/units";
 import { BarChart } from "@/lib/ui/bar-chart";
 import { DeleteButton } from "@/lib/ui/delete-button";
-import { formatDate, formatMoney, formatNumber, POSITION_LABELS } from "@/lib/format/format";
+import {
+  formatDate,
+  formatMoney,
+  formatNumber,
+  formatPerHour,
+  POSITION_LABELS,
+} from "@/lib/format/format";
 
 /** A stored estimate: per-position wear and cost, charts, the engine's warnings and the cautions. */
 export function EstimateResult({
@@ -258,7 +264,7 @@ export function EstimateResult({
               {r.turns.slice(0, 50).map((t) => (
                 <tr key={t.index}>
                   <td className="px-3 py-2">{t.label || `Turn ${t.index + 1}`}</td>
-                  <td className="px-3 py-2 text-right">{formatNumber(t.perHour, 1)}</td>
+                  <td className="px-3 py-2 text-right">{formatPerHour(t.perHour)}</td>
                   <td className="px-3 py-2 text-right">
                     {formatQuantity(system, "distance-m", t.radius, 1)}
                   </td>

@@ -18,15 +18,18 @@ export function NewEstimateForm({
   customers,
   defaultCustomerId,
   defaultMachineId,
+  defaultDutyCycleId,
 }: {
   customers: { id: string; name: string }[];
   defaultCustomerId?: string;
   defaultMachineId?: string;
+  /** Preselected from a duty cycle's "Run an estimate with this duty cycle". */
+  defaultDutyCycleId?: string;
 }) {
   const router = useRouter();
   const [customerId, setCustomerId] = useState(defaultCustomerId ?? customers[0]?.id ?? "");
   const [machineId, setMachineId] = useState(defaultMachineId ?? "");
-  const [dutyCycleId, setDutyCycleId] = useState("");
+  const [dutyCycleId, setDutyCycleId] = useState(defaultDutyCycleId ?? "");
   const [siteId, setSiteId] = useState("");
   const [title, setTitle] = useState("");
   const [errors, setErrors] = useState<Record<string, string[]>>({});

@@ -169,7 +169,17 @@ describe("builder duty cycles", () => {
       json: { source: "builder", name: "Nothing", customerId, builder: noHours },
     });
     expect(res.status).toBe(400);
-    expect(res.body.error.message).toContain("share of the hours");
+    expect(res.body.error.message).toContain("add up to 0 %; make them add up to 100 %");
+    // Field work 85 % plus road 30 %: 115 % of the hour is refused too, and nothing is stored.
+    const over = structuredClone(preset.input);
+    over.blocks[0]!.share = 0.85;
+    over.blocks[1]!.share = 0.3;
+    const tooMuch = await callRoute(createCycle, estimator.cookie, "/api/v1/duty-cycles", {
+      method: "POST",
+      json: { source: "builder", name: "Too many hours", customerId, builder: over },
+    });
+    expect(tooMuch.status).toBe(400);
+    expect(tooMuch.body.error.message).toContain("add up to 115 %");
     const foreign = await callRoute(createCycle, outsider.cookie, "/api/v1/duty-cycles", {
       method: "POST",
       json: { source: "builder", name: "Not yours", customerId, builder: preset.input },

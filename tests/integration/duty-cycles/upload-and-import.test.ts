@@ -15,11 +15,13 @@ import { GET as list, POST as create } from "@/app/api/v1/duty-cycles/route";
 import { GET as getOne, DELETE as remove } from "@/app/api/v1/duty-cycles/[id]/route";
 import { POST as retry } from "@/app/api/v1/duty-cycles/[id]/retry/route";
 import { GET as badRows } from "@/app/api/v1/duty-cycles/[id]/bad-rows/route";
+import { samplePath } from "@/lib/duty-cycles/synthetic-path";
 import { startImportWorker } from "@/features/duty-cycles/server/import-worker";
 import { getImportSender } from "@/features/duty-cycles/server/import-queue";
 import { runImport } from "@/features/duty-cycles/server/run-import";
 import { createDutyCycle } from "@/features/duty-cycles/server/create-duty-cycle";
 import {
+  KNOWN_LEGS,
   KNOWN_TURNS,
   TELEMATICS_MAPPING,
   callRoute,
@@ -314,5 +316,50 @@ describe("duty-cycle upload and import", () => {
       .where(eq(dutyCycleTurns.dutyCycleId, readyId));
     expect(left!.n).toBe(0);
     expect(existsSync(uploadDir)).toBe(true);
+  });
+
+  it("imports a Windows-1252 export with German names and ground words (Grünland)", async () => {
+    // The known log as a German Windows export: semicolons, decimal commas, single-byte ü (0xFC).
+    const samples = samplePath({ legs: KNOWN_LEGS, noise: { yawRate: 0.3 }, seed: 21 });
+    const comma = (x: number, digits: number) => x.toFixed(digits).replace(".", ",");
+    const german =
+      ["Zeit;Geschwindigkeit (km/h);Gierrate;Untergrund"]
+        .concat(
+          samples.map(
+            (p) => `${comma(p.t, 1)};${comma(p.speed * 3.6, 2)};${comma(p.yawRate, 3)};Grünland`,
+          ),
+        )
+        .join("\r\n") + "\r\n";
+    const bytes = Buffer.from(german, "latin1");
+    expect(bytes.includes(0xfc)).toBe(true);
+    const up = await callRoute(upload, estimator.cookie, "/api/v1/uploads", {
+      method: "POST",
+      body: new ReadableStream({
+        start(controller) {
+          controller.enqueue(new Uint8Array(bytes));
+          controller.close();
+        },
+      }),
+      headers: { "x-file-name": "schlag-7.csv", "content-type": "text/csv" },
+    });
+    expect(up.status).toBe(201);
+    const created = await callRoute(create, estimator.cookie, "/api/v1/duty-cycles", {
+      method: "POST",
+      json: {
+        source: "upload",
+        name: "Schlag 7",
+        customerId,
+        uploadId: up.body.id,
+        mapping: { ...TELEMATICS_MAPPING, delimiter: ";", decimal: ",", encoding: "latin1" },
+      },
+    });
+    expect(created.status).toBe(201);
+    const ready = await waitFor(
+      () => detail(created.body.id),
+      (r) => r.body.status === "ready" || r.body.status === "failed",
+    );
+    expect(ready.body.status).toBe("ready");
+    expect(ready.body.turnCount).toBe(KNOWN_TURNS);
+    expect(ready.body.turns.every((t: { surface: string }) => t.surface === "grass")).toBe(true);
   });
 });

@@ -168,3 +168,62 @@ describe("buildDutyCycle", () => {
     );
   });
 });
+
+describe("share of moving time by speed from the builder", () => {
+  // Plain arithmetic on the example: time at a speed = distance / speed (no source needed).
+  const example = BUILDER_PRESETS.find((p) => p.key === "row-crop-cultivating")!.input;
+  const withRoadShare = (road: number) => ({
+    ...example,
+    blocks: [
+      { ...example.blocks[0]!, share: 1 - road },
+      { ...example.blocks[1]!, share: road },
+    ],
+  });
+  const bands = (road: number) => {
+    const built = buildDutyCycle(withRoadShare(road));
+    const summary = summariseDutyCycle({
+      turns: built.turns,
+      straight: built.straight,
+      operatingHours: null,
+      speedSeconds: built.speedSeconds,
+    });
+    const shareKmh = (from: number, to: number) =>
+      summary.speedDistribution
+        .filter((b) => b.from * 3.6 >= from - 1e-9 && b.from * 3.6 < to - 1e-9)
+        .reduce((s, b) => s + b.share, 0);
+    return { field: shareKmh(10, 15), road: shareKmh(25, 35) };
+  };
+
+  it("keeps 12 km/h field work in the 10–15 km/h band whatever the road share", () => {
+    for (const road of [0.05, 0.15, 0.3]) expect(bands(road).field).toBeGreaterThan(0.5);
+  });
+
+  it("shows road transport at 15 % of the hours as about 15 % of moving time", () => {
+    // Both blocks move all the time, so time shares follow the hour shares: 15 % on the road,
+    // most of the other 85 % on the passes at 12 km/h (the headland turns are slower).
+    const { road, field } = bands(0.15);
+    expect(road).toBeGreaterThan(0.14);
+    expect(road).toBeLessThan(0.16);
+    expect(field).toBeGreaterThan(0.6);
+  });
+});
+
+describe("the blocks' shares of the hours", () => {
+  it("are refused unless they add up to 100 %, with the sum in the message", async () => {
+    const { ZBuilderInput } = await import("@/features/duty-cycles/schemas/builder");
+    const example = BUILDER_PRESETS.find((p) => p.key === "row-crop-cultivating")!.input;
+    const over = {
+      ...example,
+      blocks: [
+        { ...example.blocks[0]!, share: 0.85 },
+        { ...example.blocks[1]!, share: 0.3 },
+      ],
+    };
+    const result = ZBuilderInput.safeParse(over);
+    expect(result.success).toBe(false);
+    expect(result.error?.issues[0]?.message).toContain("115 %");
+    expect(result.error?.issues[0]?.message).toContain("100 %");
+    for (const preset of BUILDER_PRESETS)
+      expect(ZBuilderInput.safeParse(preset.input).success, preset.key).toBe(true);
+  });
+});

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { getPathLength, getPreciseDistance } from "geolib";
-import { segmentTurns, wrapDegrees, type TTurnSample } from "@/lib/scrub/segment-turns";
+import { segmentTurns, wrapDegrees, type TTurnSample } from "@/lib/scrub";
 import {
   gaussian,
   samplePath,
@@ -47,6 +47,29 @@ const uTurnField: TPathLeg[] = [
   { kind: "arc", radius: 12, headingChange: -90, speed: 2.5 },
   { kind: "straight", distance: 40, speed: 3 },
 ];
+
+describe("the engine entry @/lib/scrub", () => {
+  it("exports segmentTurns(samples, options) returning turns in the documented shape", () => {
+    expect(typeof segmentTurns).toBe("function");
+    const path = samplePath({ legs: uTurnField, seed: 2 });
+    const [turn] = segmentTurns(
+      path.map((s) => ({ t: s.t, speed: s.speed, yawRate: s.yawRate })),
+      { wheelbase: WHEELBASE },
+    );
+    expect(Object.keys(turn!)).toEqual(
+      expect.arrayContaining([
+        "start",
+        "end",
+        "headingChange",
+        "radius",
+        "speed",
+        "distance",
+        "direction",
+      ]),
+    );
+    expect(turn!.end).toBeGreaterThan(turn!.start);
+  });
+});
 
 describe("segmentTurns on generated paths with known turns", () => {
   for (const [source, pick] of Object.entries(bySource)) {

@@ -7,7 +7,12 @@ import { customerChoices } from "../customer-choices";
 
 export const metadata = { title: "Build a duty cycle" };
 
-export default async function BuildDutyCyclePage() {
+export default async function BuildDutyCyclePage({
+  searchParams,
+}: {
+  searchParams: Promise<{ customerId?: string | string[] }>;
+}) {
+  const { customerId } = await searchParams;
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   if (!can(actor, "duty-cycle:write")) redirect("/duty-cycles");
@@ -24,7 +29,10 @@ export default async function BuildDutyCyclePage() {
       {customers.length === 0 ? (
         <EmptyState title="Add a customer first">A duty cycle belongs to a customer.</EmptyState>
       ) : (
-        <BuilderForm customers={customers} />
+        <BuilderForm
+          customers={customers}
+          initialCustomerId={typeof customerId === "string" ? customerId : undefined}
+        />
       )}
     </div>
   );

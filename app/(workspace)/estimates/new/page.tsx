@@ -11,12 +11,12 @@ export const metadata = { title: "New estimate" };
 export default async function NewEstimatePage({
   searchParams,
 }: {
-  searchParams: Promise<{ customerId?: string; machineId?: string }>;
+  searchParams: Promise<{ customerId?: string; machineId?: string; dutyCycleId?: string }>;
 }) {
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   if (!can(actor, "estimate:run")) redirect("/estimates");
-  const { customerId, machineId } = await searchParams;
+  const { customerId, machineId, dutyCycleId } = await searchParams;
   const customers = await listCustomerChoices({ db: getDb(), actor });
   return (
     <div className="flex flex-col gap-4">
@@ -25,6 +25,7 @@ export default async function NewEstimatePage({
         customers={customers}
         defaultCustomerId={customerId}
         defaultMachineId={machineId}
+        defaultDutyCycleId={dutyCycleId}
       />
       <EstimateSafetyCaution />
     </div>
