@@ -3,3 +3,4 @@ export * from "@/db/tables/tenancy";
 export * from "@/db/tables/workspace";
 export * from "@/db/tables/duty-cycles";
 export * from "@/db/tables/accounts";
+export * from "@/db/tables/options";

@@ -71,6 +71,8 @@ type TRecords = {
   machine: { id: string; name: string };
   dutyCycle: { id: string; name: string };
   estimate: { id: string; title: string };
+  comparison: { id: string; title: string };
+  sweep: { id: string; title: string };
 };
 
 async function seedRecords(dealershipId: string, label: string): Promise<TRecords> {
@@ -140,7 +142,30 @@ async function seedRecords(dealershipId: string, label: string): Promise<TRecord
       },
     })
     .returning();
+  const [comparison, sweep] = await db
+    .insert(schema.optionStudies)
+    .values(
+      (["comparison", "sweep"] as const).map((kind) => {
+        const id = crypto.randomUUID();
+        return {
+          id,
+          seriesId: id,
+          kind,
+          dealershipId,
+          customerId: customer!.id,
+          machineId: machine!.id,
+          estimateId: estimate!.id,
+          title: `${label} ${kind} ${tag}`,
+          engineVersion: "0.0.0",
+          inputs: {},
+          result: { hours: 1, current: null, options: [], points: [] },
+        };
+      }),
+    )
+    .returning();
   return {
+    comparison: { id: comparison!.id, title: comparison!.title },
+    sweep: { id: sweep!.id, title: sweep!.title },
     customer: { id: customer!.id, name: customer!.name },
     site: { id: site!.id, name: site!.name },
     machine: { id: machine!.id, name: machine!.name },
@@ -161,6 +186,10 @@ function markersOf(r: TRecords): string[] {
     r.dutyCycle.name,
     r.estimate.id,
     r.estimate.title,
+    r.comparison.id,
+    r.comparison.title,
+    r.sweep.id,
+    r.sweep.title,
   ];
 }
 
@@ -296,6 +325,8 @@ const COLLECTION_IDS: Record<string, (w: TWorld) => string> = {
   machines: (w) => w.home.other.machine.id,
   "duty-cycles": (w) => w.home.other.dutyCycle.id,
   estimates: (w) => w.home.other.estimate.id,
+  comparisons: (w) => w.home.other.comparison.id,
+  sweeps: (w) => w.home.other.sweep.id,
   "mapping-templates": (w) => w.home.templateId,
   invitations: (w) => w.home.invitationId,
 };

@@ -1,0 +1,18 @@
+import { getDb } from "@/db/client";
+import { withActor } from "@/app/api/_lib/with-actor";
+import { rerunStudy } from "@/features/options/server/rerun-study";
+import { respond, studyId } from "@/features/options/server/respond";
+import { toSweepDto } from "@/features/options/server/study-dto";
+
+export const dynamic = "force-dynamic";
+
+/** Reruns the frozen inputs with today's engine as the next version. */
+export const POST = withActor(({ actor, params }) =>
+  respond(
+    async () =>
+      toSweepDto(
+        await rerunStudy({ db: getDb(), actor, kind: "sweep", id: studyId(params.id, "sweep") }),
+      ),
+    201,
+  ),
+);
