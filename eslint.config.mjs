@@ -1,20 +1,38 @@
-import { existsSync, readdirSync } from "node:fs";
+import { existsSync, readdirSync, readFileSync } from "node:fs";
 import nextVitals from "eslint-config-next/core-web-vitals";
 import nextTs from "eslint-config-next/typescript";
 
-// One-way imports: app -> features -> lib, db. Features never import each other.
-// Read from disk so a new feature folder is covered without editing this file.
-const featureNames = existsSync("features")
+/**
+ * The declared order of features, lowest first (features/order.json). A feature may import a
+ * lower one only through its public entries (`index.ts` for server code, `client.ts` for browser
+ * code), and never a higher one. Two entries, because a browser bundle must never reach a module
+ * marked "server-only". DEVELOPERS.md explains it.
+ */
+const FEATURE_ORDER = JSON.parse(readFileSync("features/order.json", "utf8"));
+
+const featuresOnDisk = existsSync("features")
   ? readdirSync("features", { withFileTypes: true })
       .filter((d) => d.isDirectory())
       .map((d) => d.name)
   : [];
-const featureZones = featureNames.map((name) => ({
-  target: `./features/${name}`,
-  from: "./features",
-  except: [`./${name}`],
-  message: "A feature must not import another feature: compose them in app/.",
-}));
+const undeclared = featuresOnDisk.filter((name) => !FEATURE_ORDER.includes(name));
+if (undeclared.length > 0)
+  throw new Error(`features/${undeclared[0]} is not in features/order.json`);
+
+// For each feature: higher features are off limits, and lower ones only through their entries.
+const featureZones = FEATURE_ORDER.flatMap((name, rank) => [
+  ...FEATURE_ORDER.slice(rank + 1).map((higher) => ({
+    target: `./features/${name}`,
+    from: `./features/${higher}`,
+    message: `features/${name} sits below features/${higher} in FEATURE_ORDER: it may not import it. Compose them in app/ or move the shared piece down.`,
+  })),
+  ...FEATURE_ORDER.slice(0, rank).map((lower) => ({
+    target: `./features/${name}`,
+    from: `./features/${lower}`,
+    except: ["./index.ts", "./client.ts"],
+    message: `Import features/${lower} only through its public entries (index.ts on the server, client.ts in the browser).`,
+  })),
+]);
 
 const config = [
   {

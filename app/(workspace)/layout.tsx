@@ -3,7 +3,7 @@ import type { ReactNode } from "react";
 import { getActor } from "@/features/auth/server/get-actor";
 import { authNavItems } from "@/features/auth/nav";
 import { UserMenu } from "@/features/auth/components/user-menu";
-import { GlobalSearch } from "@/features/workspace/components/global-search";
+import { GlobalSearch } from "@/features/search/components/global-search";
 import { isStaff } from "@/lib/authz/policy";
 import { AppShell, type NavItem } from "@/lib/ui/app-shell";
 

@@ -17,7 +17,7 @@ import { ENGINE_VERSION, estimate, type TMachineInput } from "@/lib/scrub";
 import { DEMO_MACHINES } from "@/lib/demo/machines";
 import { DEMO_DUTY_CYCLES } from "@/lib/demo/duty-cycles";
 import type { TStraight } from "@/lib/duty-cycles/stored-duty-cycle";
-import { buildEstimateRecord, toStoredTurn } from "@/features/workspace/lib/estimate-record";
+import { buildEstimateRecord, toStoredTurn } from "@/features/estimates/lib/estimate-record";
 
 type TKind = "tractor" | "loader" | "skid-steer" | "telehandler" | "combine" | "wagon";
 

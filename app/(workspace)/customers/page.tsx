@@ -2,11 +2,11 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getActor } from "@/features/auth/server/get-actor";
-import { DEFAULT_LISTS } from "@/features/workspace/api/list-state";
-import { CustomersTable } from "@/features/workspace/components/customers-table";
-import { prefetch } from "@/features/workspace/server/prefetch";
+import { CustomersTable } from "@/features/customers/components/customers-table";
+import { prefetchCustomerList } from "@/features/customers/server/prefetch-customers";
 import { can, isStaff } from "@/lib/authz/policy";
 import { makeQueryClient } from "@/lib/query/query-client";
+import { DEFAULT_CUSTOMER_LIST } from "@/features/customers/api/customers";
 
 export const metadata = { title: "Customers" };
 
@@ -15,7 +15,7 @@ export default async function CustomersPage() {
   if (!actor) redirect("/sign-in");
   if (!isStaff(actor)) redirect(`/customers/${actor.customerId}`);
   const qc = makeQueryClient();
-  await prefetch.customers(qc, actor, DEFAULT_LISTS.customers);
+  await prefetchCustomerList(qc, actor, DEFAULT_CUSTOMER_LIST);
   const canWrite = can(actor, "customer:write");
   return (
     <div className="flex flex-col gap-4">

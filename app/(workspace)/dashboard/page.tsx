@@ -3,19 +3,20 @@ import { redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getDb } from "@/db/client";
 import { getActor } from "@/features/auth/server/get-actor";
-import { DEFAULT_LISTS, listState } from "@/features/workspace/api/list-state";
-import { EstimatesTable } from "@/features/workspace/components/estimates-table";
-import { formatDate } from "@/features/workspace/components/format";
-import { getDashboard } from "@/features/workspace/server/get-dashboard";
-import { prefetch } from "@/features/workspace/server/prefetch";
+import { listState } from "@/lib/query/list-state";
+import { EstimatesTable } from "@/features/estimates/components/estimates-table";
+import { formatDate } from "@/lib/format/format";
+import { getDashboard } from "@/features/search/server/get-dashboard";
+import { prefetchEstimateList } from "@/features/estimates/server/prefetch-estimates";
 import { can } from "@/lib/authz/policy";
 import { makeQueryClient } from "@/lib/query/query-client";
 import { Card } from "@/lib/ui/card";
 import { EmptyState } from "@/lib/ui/empty-state";
+import { DEFAULT_ESTIMATE_LIST } from "@/features/estimates/api/estimates";
 
 export const metadata = { title: "Dashboard" };
 
-const RECENT = listState({ ...DEFAULT_LISTS.estimates, pageSize: 10 });
+const RECENT = listState({ ...DEFAULT_ESTIMATE_LIST, pageSize: 10 });
 
 export default async function DashboardPage() {
   const actor = await getActor();
@@ -23,7 +24,7 @@ export default async function DashboardPage() {
   const qc = makeQueryClient();
   const [summary] = await Promise.all([
     getDashboard({ db: getDb(), actor }),
-    prefetch.estimates(qc, actor, RECENT),
+    prefetchEstimateList(qc, actor, RECENT),
   ]);
   const canRun = can(actor, "estimate:run");
   return (

@@ -1,7 +1,7 @@
 import { getDb } from "@/db/client";
 import type { TActor } from "@/lib/authz/actor";
-import { ZCustomerListQuery } from "@/features/workspace/schemas/list-query";
-import { listCustomers } from "@/features/workspace/server/list-customers";
+import { ZCustomerListQuery } from "@/features/customers/schemas/customer-list-query";
+import { listCustomers } from "@/features/customers/server/list-customers";
 
 /** The customers a duty cycle may be filed under, for the upload and builder forms. */
 export async function customerChoices(actor: TActor) {

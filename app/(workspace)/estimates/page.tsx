@@ -2,11 +2,11 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getActor } from "@/features/auth/server/get-actor";
-import { DEFAULT_LISTS } from "@/features/workspace/api/list-state";
-import { EstimatesTable } from "@/features/workspace/components/estimates-table";
-import { prefetch } from "@/features/workspace/server/prefetch";
+import { EstimatesTable } from "@/features/estimates/components/estimates-table";
+import { prefetchEstimateList } from "@/features/estimates/server/prefetch-estimates";
 import { can } from "@/lib/authz/policy";
 import { makeQueryClient } from "@/lib/query/query-client";
+import { DEFAULT_ESTIMATE_LIST } from "@/features/estimates/api/estimates";
 
 export const metadata = { title: "Estimates" };
 
@@ -14,7 +14,7 @@ export default async function EstimatesPage() {
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   const qc = makeQueryClient();
-  await prefetch.estimates(qc, actor, DEFAULT_LISTS.estimates);
+  await prefetchEstimateList(qc, actor, DEFAULT_ESTIMATE_LIST);
   const canRun = can(actor, "estimate:run");
   return (
     <div className="flex flex-col gap-4">

@@ -2,11 +2,11 @@ import Link from "next/link";
 import { redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getActor } from "@/features/auth/server/get-actor";
-import { DEFAULT_LISTS } from "@/features/workspace/api/list-state";
-import { MachinesTable } from "@/features/workspace/components/machines-table";
-import { prefetch } from "@/features/workspace/server/prefetch";
+import { MachinesTable } from "@/features/machines/components/machines-table";
+import { prefetchMachineList } from "@/features/machines/server/prefetch-machines";
 import { can, isStaff } from "@/lib/authz/policy";
 import { makeQueryClient } from "@/lib/query/query-client";
+import { DEFAULT_MACHINE_LIST } from "@/features/machines/api/machines";
 
 export const metadata = { title: "Machines" };
 
@@ -14,7 +14,7 @@ export default async function MachinesPage() {
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   const qc = makeQueryClient();
-  await prefetch.machines(qc, actor, DEFAULT_LISTS.machines);
+  await prefetchMachineList(qc, actor, DEFAULT_MACHINE_LIST);
   const canWrite = can(actor, "machine:write");
   return (
     <div className="flex flex-col gap-4">

@@ -1,6 +1,6 @@
 import { redirect } from "next/navigation";
 import { getActor } from "@/features/auth/server/get-actor";
-import { SearchResults } from "@/features/workspace/components/search-results";
+import { SearchResults } from "@/features/search/components/search-results";
 
 export const metadata = { title: "Search" };
 

@@ -1,8 +1,12 @@
 import { notFound, redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getActor } from "@/features/auth/server/get-actor";
-import { CustomerDetail } from "@/features/workspace/components/customer-detail";
-import { isUuid, prefetch } from "@/features/workspace/server/prefetch";
+import { CustomerDetail } from "@/features/customers/components/customer-detail";
+import { prefetchCustomer } from "@/features/customers/server/prefetch-customers";
+import { isUuid } from "@/features/platform/server/found";
+import { MachinesTable } from "@/features/machines/components/machines-table";
+import { EstimatesTable } from "@/features/estimates/components/estimates-table";
+import { Card } from "@/lib/ui/card";
 import { can } from "@/lib/authz/policy";
 import { makeQueryClient } from "@/lib/query/query-client";
 
@@ -13,10 +17,18 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   const qc = makeQueryClient();
-  if (!isUuid(id) || !(await prefetch.customer(qc, actor, id))) notFound();
+  if (!isUuid(id) || !(await prefetchCustomer(qc, actor, id))) notFound();
+  const canWrite = can(actor, "customer:write");
   return (
     <HydrationBoundary state={dehydrate(qc)}>
-      <CustomerDetail id={id} canWrite={can(actor, "customer:write")} />
+      <CustomerDetail id={id} canWrite={canWrite}>
+        <Card title="Machines">
+          <MachinesTable canWrite={canWrite} customerId={id} />
+        </Card>
+        <Card title="Estimates">
+          <EstimatesTable canRun={canWrite} customerId={id} pageSize={10} />
+        </Card>
+      </CustomerDetail>
     </HydrationBoundary>
   );
 }

@@ -1,6 +1,6 @@
 import { redirect } from "next/navigation";
 import { getActor } from "@/features/auth/server/get-actor";
-import { CustomerForm } from "@/features/workspace/components/customer-form";
+import { CustomerForm } from "@/features/customers/components/customer-form";
 import { can } from "@/lib/authz/policy";
 
 export const metadata = { title: "New customer" };

@@ -1,8 +1,9 @@
 import { notFound, redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getActor } from "@/features/auth/server/get-actor";
-import { EstimateResult } from "@/features/workspace/components/estimate-result";
-import { isUuid, prefetch } from "@/features/workspace/server/prefetch";
+import { EstimateResult } from "@/features/estimates/components/estimate-result";
+import { prefetchEstimate } from "@/features/estimates/server/prefetch-estimates";
+import { isUuid } from "@/features/platform/server/found";
 import { can } from "@/lib/authz/policy";
 import { makeQueryClient } from "@/lib/query/query-client";
 
@@ -13,7 +14,7 @@ export default async function EstimatePage({ params }: { params: Promise<{ id: s
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   const qc = makeQueryClient();
-  if (!isUuid(id) || !(await prefetch.estimate(qc, actor, id))) notFound();
+  if (!isUuid(id) || !(await prefetchEstimate(qc, actor, id))) notFound();
   return (
     <HydrationBoundary state={dehydrate(qc)}>
       <EstimateResult id={id} system={actor.unitSystem} canWrite={can(actor, "estimate:write")} />

@@ -1,8 +1,8 @@
 import { redirect } from "next/navigation";
 import { getDb } from "@/db/client";
 import { getActor } from "@/features/auth/server/get-actor";
-import { NewEstimateForm } from "@/features/workspace/components/new-estimate-form";
-import { listCustomerChoices } from "@/features/workspace/server/list-customer-choices";
+import { NewEstimateForm } from "@/features/estimates/components/new-estimate-form";
+import { listCustomerChoices } from "@/features/customers/server/list-customer-choices";
 import { can } from "@/lib/authz/policy";
 import { EstimateSafetyCaution } from "@/lib/ui/caution";
 

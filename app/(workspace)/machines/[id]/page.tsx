@@ -2,10 +2,13 @@ import { notFound, redirect } from "next/navigation";
 import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import { getDb } from "@/db/client";
 import { getActor } from "@/features/auth/server/get-actor";
-import { MachineDetail } from "@/features/workspace/components/machine-detail";
-import { listCustomerChoices } from "@/features/workspace/server/list-customer-choices";
-import { isUuid, prefetch } from "@/features/workspace/server/prefetch";
+import { MachineDetail } from "@/features/machines/components/machine-detail";
+import { listCustomerChoices } from "@/features/customers/server/list-customer-choices";
+import { prefetchMachine } from "@/features/machines/server/prefetch-machines";
+import { isUuid } from "@/features/platform/server/found";
+import { EstimatesTable } from "@/features/estimates/components/estimates-table";
 import { can } from "@/lib/authz/policy";
+import { Card } from "@/lib/ui/card";
 import { makeQueryClient } from "@/lib/query/query-client";
 
 export const metadata = { title: "Machine" };
@@ -15,8 +18,9 @@ export default async function MachinePage({ params }: { params: Promise<{ id: st
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   const qc = makeQueryClient();
-  if (!isUuid(id) || !(await prefetch.machine(qc, actor, id))) notFound();
+  if (!isUuid(id) || !(await prefetchMachine(qc, actor, id))) notFound();
   const customers = await listCustomerChoices({ db: getDb(), actor });
+  const canRun = can(actor, "estimate:run");
   return (
     <HydrationBoundary state={dehydrate(qc)}>
       <MachineDetail
@@ -24,8 +28,12 @@ export default async function MachinePage({ params }: { params: Promise<{ id: st
         customers={customers}
         system={actor.unitSystem}
         canWrite={can(actor, "machine:write")}
-        canRun={can(actor, "estimate:run")}
-      />
+        canRun={canRun}
+      >
+        <Card title="Estimates for this machine">
+          <EstimatesTable canRun={canRun} machineId={id} pageSize={10} />
+        </Card>
+      </MachineDetail>
     </HydrationBoundary>
   );
 }

@@ -1,8 +1,8 @@
 import { redirect } from "next/navigation";
 import { getDb } from "@/db/client";
 import { getActor } from "@/features/auth/server/get-actor";
-import { MachineForm } from "@/features/workspace/components/machine-form/machine-form";
-import { listCustomerChoices } from "@/features/workspace/server/list-customer-choices";
+import { MachineForm } from "@/features/machines/components/machine-form/machine-form";
+import { listCustomerChoices } from "@/features/customers/server/list-customer-choices";
 import { can } from "@/lib/authz/policy";
 
 export const metadata = { title: "New machine" };

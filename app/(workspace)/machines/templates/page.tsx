@@ -1,8 +1,8 @@
 import { redirect } from "next/navigation";
 import { getDb } from "@/db/client";
 import { getActor } from "@/features/auth/server/get-actor";
-import { TemplatesPanel } from "@/features/workspace/components/templates-panel";
-import { listCustomerChoices } from "@/features/workspace/server/list-customer-choices";
+import { TemplatesPanel } from "@/features/machines/components/templates-panel";
+import { listCustomerChoices } from "@/features/customers/server/list-customer-choices";
 import { can, isStaff } from "@/lib/authz/policy";
 
 export const metadata = { title: "Dealership templates" };

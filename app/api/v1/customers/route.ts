@@ -1,10 +1,10 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { ZCustomerListQuery } from "@/features/workspace/schemas/list-query";
-import { parseOrThrow } from "@/features/workspace/server/errors";
-import { queryOf, readJson, respond } from "@/features/workspace/server/respond";
-import { listCustomers } from "@/features/workspace/server/list-customers";
-import { createCustomer } from "@/features/workspace/server/create-customer";
+import { ZCustomerListQuery } from "@/features/customers/schemas/customer-list-query";
+import { parseOrThrow } from "@/features/platform/server/api-error";
+import { queryOf, readJson, respond } from "@/features/platform/server/respond";
+import { listCustomers } from "@/features/customers/server/list-customers";
+import { createCustomer } from "@/features/customers/server/create-customer";
 
 export const GET = withActor(({ req, actor }) =>
   respond(() =>

@@ -1,10 +1,10 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { ZEstimateListQuery } from "@/features/workspace/schemas/list-query";
-import { parseOrThrow } from "@/features/workspace/server/errors";
-import { queryOf, readJson, respond } from "@/features/workspace/server/respond";
-import { listEstimates } from "@/features/workspace/server/list-estimates";
-import { createEstimate } from "@/features/workspace/server/create-estimate";
+import { ZEstimateListQuery } from "@/features/estimates/schemas/estimate-list-query";
+import { parseOrThrow } from "@/features/platform/server/api-error";
+import { queryOf, readJson, respond } from "@/features/platform/server/respond";
+import { listEstimates } from "@/features/estimates/server/list-estimates";
+import { createEstimate } from "@/features/estimates/server/create-estimate";
 
 export const GET = withActor(({ req, actor }) =>
   respond(() =>

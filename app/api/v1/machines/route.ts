@@ -1,10 +1,10 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { ZMachineListQuery } from "@/features/workspace/schemas/list-query";
-import { parseOrThrow } from "@/features/workspace/server/errors";
-import { queryOf, readJson, respond } from "@/features/workspace/server/respond";
-import { listMachines } from "@/features/workspace/server/list-machines";
-import { createMachine } from "@/features/workspace/server/create-machine";
+import { ZMachineListQuery } from "@/features/machines/schemas/machine-list-query";
+import { parseOrThrow } from "@/features/platform/server/api-error";
+import { queryOf, readJson, respond } from "@/features/platform/server/respond";
+import { listMachines } from "@/features/machines/server/list-machines";
+import { createMachine } from "@/features/machines/server/create-machine";
 
 export const GET = withActor(({ req, actor }) =>
   respond(() =>

@@ -1,10 +1,10 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { ZSiteListQuery } from "@/features/workspace/schemas/list-query";
-import { parseOrThrow } from "@/features/workspace/server/errors";
-import { queryOf, readJson, respond } from "@/features/workspace/server/respond";
-import { listSites } from "@/features/workspace/server/list-sites";
-import { createSite } from "@/features/workspace/server/create-site";
+import { ZSiteListQuery } from "@/features/customers/schemas/customer-list-query";
+import { parseOrThrow } from "@/features/platform/server/api-error";
+import { queryOf, readJson, respond } from "@/features/platform/server/respond";
+import { listSites } from "@/features/customers/server/list-sites";
+import { createSite } from "@/features/customers/server/create-site";
 
 export const GET = withActor(({ req, actor }) =>
   respond(() =>

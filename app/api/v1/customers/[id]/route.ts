@@ -1,9 +1,9 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { confirmed, pathId, readJson, respond } from "@/features/workspace/server/respond";
-import { getCustomer } from "@/features/workspace/server/get-customer";
-import { updateCustomer } from "@/features/workspace/server/update-customer";
-import { deleteCustomer } from "@/features/workspace/server/delete-customer";
+import { confirmed, pathId, readJson, respond } from "@/features/platform/server/respond";
+import { getCustomer } from "@/features/customers/server/get-customer";
+import { updateCustomer } from "@/features/customers/server/update-customer";
+import { deleteCustomer } from "@/features/customers/server/delete-customer";
 
 export const GET = withActor(({ actor, params }) =>
   respond(() => getCustomer({ db: getDb(), actor, id: pathId(params.id, "customer") })),

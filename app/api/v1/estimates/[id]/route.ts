@@ -1,9 +1,9 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { confirmed, pathId, readJson, respond } from "@/features/workspace/server/respond";
-import { getEstimate } from "@/features/workspace/server/get-estimate";
-import { deleteEstimate } from "@/features/workspace/server/delete-estimate";
-import { updateEstimate } from "@/features/workspace/server/update-estimate";
+import { confirmed, pathId, readJson, respond } from "@/features/platform/server/respond";
+import { getEstimate } from "@/features/estimates/server/get-estimate";
+import { deleteEstimate } from "@/features/estimates/server/delete-estimate";
+import { updateEstimate } from "@/features/estimates/server/update-estimate";
 
 export const GET = withActor(({ actor, params }) =>
   respond(() => getEstimate({ db: getDb(), actor, id: pathId(params.id, "estimate") })),

@@ -1,9 +1,9 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { confirmed, pathId, readJson, respond } from "@/features/workspace/server/respond";
-import { getMachine } from "@/features/workspace/server/get-machine";
-import { updateMachine } from "@/features/workspace/server/update-machine";
-import { deleteMachine } from "@/features/workspace/server/delete-machine";
+import { confirmed, pathId, readJson, respond } from "@/features/platform/server/respond";
+import { getMachine } from "@/features/machines/server/get-machine";
+import { updateMachine } from "@/features/machines/server/update-machine";
+import { deleteMachine } from "@/features/machines/server/delete-machine";
 
 export const GET = withActor(({ actor, params }) =>
   respond(() => getMachine({ db: getDb(), actor, id: pathId(params.id, "machine") })),

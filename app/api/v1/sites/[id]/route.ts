@@ -1,9 +1,9 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { confirmed, pathId, readJson, respond } from "@/features/workspace/server/respond";
-import { getSite } from "@/features/workspace/server/get-site";
-import { updateSite } from "@/features/workspace/server/update-site";
-import { deleteSite } from "@/features/workspace/server/delete-site";
+import { confirmed, pathId, readJson, respond } from "@/features/platform/server/respond";
+import { getSite } from "@/features/customers/server/get-site";
+import { updateSite } from "@/features/customers/server/update-site";
+import { deleteSite } from "@/features/customers/server/delete-site";
 
 export const GET = withActor(({ actor, params }) =>
   respond(() => getSite({ db: getDb(), actor, id: pathId(params.id, "site") })),

@@ -1,7 +1,7 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, respond } from "@/features/workspace/server/respond";
-import { exportEstimateCsv } from "@/features/workspace/server/export-estimate-csv";
+import { pathId, respond } from "@/features/platform/server/respond";
+import { exportEstimateCsv } from "@/features/estimates/server/export-estimate-csv";
 
 /** Per-turn CSV download of a stored estimate. */
 export const GET = withActor(async ({ actor, params }) => {

@@ -1,7 +1,7 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
-import { pathId, readJson, respond } from "@/features/workspace/server/respond";
-import { copyMachineTemplate } from "@/features/workspace/server/copy-machine-template";
+import { pathId, readJson, respond } from "@/features/platform/server/respond";
+import { copyMachineTemplate } from "@/features/machines/server/copy-machine-template";
 
 /** Copies a template (or any machine) to a customer. */
 export const POST = withActor(({ req, actor, params }) =>

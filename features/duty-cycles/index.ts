@@ -1,0 +1,2 @@
+// Public server entry of the duty-cycles feature (uploads, column mapping, import, builder).
+export { getDutyCycle } from "./server/get-duty-cycle";

@@ -1,0 +1,108 @@
+"use client";
+
+import Link from "next/link";
+import { useState } from "react";
+import type { ColumnDef } from "@tanstack/react-table";
+import type { TEstimateRow } from "@/features/estimates/schemas/estimate";
+import { useEstimates, DEFAULT_ESTIMATE_LIST } from "@/features/estimates/api/estimates";
+import { type TListState } from "@/lib/query/list-state";
+import { ServerDataTable } from "@/lib/ui/server-data-table";
+import { formatDate, formatMoney, formatNumber, POSITION_LABELS } from "@/lib/format/format";
+import { EmptyState } from "@/lib/ui/empty-state";
+
+const columns: ColumnDef<TEstimateRow, unknown>[] = [
+  {
+    id: "title",
+    header: "Estimate",
+    enableHiding: false,
+    cell: ({ row }) => (
+      <Link
+        href={`/estimates/${row.original.id}`}
+        className="font-medium text-furrow-700 hover:underline"
+      >
+        {row.original.title}
+      </Link>
+    ),
+  },
+  {
+    id: "customerName",
+    header: "Customer",
+    enableSorting: false,
+    cell: ({ row }) => row.original.customerName ?? "—",
+  },
+  { id: "machineName", header: "Machine", cell: ({ row }) => row.original.machineName },
+  {
+    id: "dutyCycleName",
+    header: "Duty cycle",
+    enableSorting: false,
+    cell: ({ row }) => row.original.dutyCycleName,
+  },
+  {
+    id: "costPerHour",
+    header: "Tyre cost per hour",
+    cell: ({ row }) => formatMoney(row.original.costPerHour),
+  },
+  {
+    id: "hoursToFirstReplacement",
+    header: "Hours to first replacement",
+    cell: ({ row }) => formatNumber(row.original.hoursToFirstReplacement, 0),
+  },
+  {
+    id: "firstToWear",
+    header: "Wears first",
+    enableSorting: false,
+    cell: ({ row }) => (row.original.firstToWear ? POSITION_LABELS[row.original.firstToWear] : "—"),
+  },
+  {
+    id: "warningCount",
+    header: "Warnings",
+    enableSorting: false,
+    cell: ({ row }) => row.original.warningCount,
+  },
+  { id: "createdAt", header: "Run on", cell: ({ row }) => formatDate(row.original.createdAt) },
+];
+
+export function EstimatesTable({
+  canRun,
+  customerId,
+  machineId,
+  pageSize,
+}: {
+  canRun: boolean;
+  customerId?: string;
+  machineId?: string;
+  pageSize?: number;
+}) {
+  const [state, setState] = useState<TListState>({
+    ...DEFAULT_ESTIMATE_LIST,
+    ...(pageSize ? { pageSize } : {}),
+    filters: { ...(customerId ? { customerId } : {}), ...(machineId ? { machineId } : {}) },
+  });
+  const query = useEstimates(state);
+  return (
+    <ServerDataTable
+      caption="Estimates"
+      columns={columns}
+      state={state}
+      onStateChange={setState}
+      query={query}
+      searchLabel="Find an estimate"
+      getRowId={(r) => r.id}
+      initiallyHidden={["dutyCycleName", "warningCount", ...(customerId ? ["customerName"] : [])]}
+      empty={
+        <EmptyState
+          title="No estimates yet"
+          action={
+            canRun ? (
+              <Link href="/estimates/new" className="font-medium text-furrow-700 underline">
+                Run an estimate
+              </Link>
+            ) : undefined
+          }
+        >
+          An estimate runs a machine through a duty cycle and stores the result.
+        </EmptyState>
+      }
+    />
+  );
+}

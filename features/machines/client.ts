@@ -1,0 +1,3 @@
+// Public browser entry of the machines feature: query hooks, key factories and components.
+export { machineKeys, useMachine, useMachines } from "./api/machines";
+export { MachinesTable } from "./components/machines-table";

@@ -1,0 +1,4 @@
+// Public server entry of the search feature (global search and the dashboard summary).
+export { getDashboard } from "./server/get-dashboard";
+export { searchWorkspace } from "./server/search-workspace";
+export type { TSearchHit, TSearchResult } from "./schemas/search";

@@ -1,8 +1,0 @@
-export type TSearchHit = {
-  type: "customer" | "machine";
-  id: string;
-  title: string;
-  subtitle: string;
-  href: string;
-};
-export type TSearchResult = { q: string; customers: TSearchHit[]; machines: TSearchHit[] };
