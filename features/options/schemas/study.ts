@@ -1,4 +1,5 @@
 import { z } from "zod";
+import type { TPage } from "@/lib/query/list-query";
 import { ZOptionSpec, ZSweepSpec, type TComparisonResult, type TSweepResult } from "@/lib/scrub";
 
 export const ZStudyKind = z.enum(["comparison", "sweep"]);
@@ -63,10 +64,5 @@ export interface TSweepDto extends TStudyRow {
   result: TSweepResult;
 }
 
-export interface TStudyPage<T> {
-  items: T[];
-  page: number;
-  pageSize: number;
-  total: number;
-  pageCount: number;
-}
+/** A page of a list, the shape every list route answers. */
+export type TStudyPage<T> = TPage<T>;

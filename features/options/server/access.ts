@@ -1,7 +1,7 @@
 import "server-only";
 import type { TActor } from "@/lib/authz/actor";
 import { can } from "@/lib/authz/policy";
-import { notFound, OptionsError } from "./errors";
+import { ApiError, notFound } from "@/features/platform";
 
 type TOwned = { dealershipId: string; customerId: string | null } | undefined;
 
@@ -15,5 +15,5 @@ export function assertMayRead(actor: TActor, row: TOwned, what: string): asserts
 
 export function assertMayRun(actor: TActor) {
   if (!can(actor, "estimate:run"))
-    throw new OptionsError(403, "forbidden", "Your role may not run comparisons or sweeps.");
+    throw new ApiError(403, "forbidden", "Your role may not run comparisons or sweeps.");
 }

@@ -7,7 +7,7 @@ import type { TDutyCycleInput, TMachineInput } from "@/lib/scrub";
 import { ZComparisonCreate, ZSweepCreate, type TStudyKind } from "../schemas/study";
 import { can } from "@/lib/authz/policy";
 import { assertMayRun } from "./access";
-import { OptionsError, parseInput } from "./errors";
+import { ApiError, parseOrThrow } from "@/features/platform";
 import { runStudy, type TStudyInputs } from "./run-study";
 
 /**
@@ -27,14 +27,16 @@ export async function createStudy({
 }) {
   assertMayRun(actor);
   const body =
-    kind === "comparison" ? parseInput(ZComparisonCreate, input) : parseInput(ZSweepCreate, input);
+    kind === "comparison"
+      ? parseOrThrow(ZComparisonCreate, input)
+      : parseOrThrow(ZSweepCreate, input);
   const [source] = await db
     .select()
     .from(estimates)
     .where(and(eq(estimates.id, body.estimateId), eq(estimates.dealershipId, actor.dealershipId)));
   if (!source || !can(actor, "estimate:read", source)) {
     const message = "No estimate with that id in your workspace.";
-    throw new OptionsError(400, "invalid_input", `Please fix the input. estimateId: ${message}`, {
+    throw new ApiError(400, "invalid_input", `Please fix the input. estimateId: ${message}`, {
       estimateId: [message],
     });
   }

@@ -10,7 +10,7 @@ import {
   type TStudyPage,
   type TStudyRow,
 } from "../schemas/study";
-import { notFound, parseInput } from "./errors";
+import { notFound, parseOrThrow, toPage } from "@/features/platform";
 import { toStudyRow } from "./study-dto";
 
 /** Newest first, narrowed to a machine, customer or estimate; a customer sees only their own. */
@@ -26,7 +26,7 @@ export async function listStudies({
   query: unknown;
 }): Promise<TStudyPage<TStudyRow>> {
   if (!can(actor, "estimate:read")) throw notFound(kind);
-  const q = parseInput(ZStudyListQuery, query);
+  const q = parseOrThrow(ZStudyListQuery, query);
   const scope = readScope(actor);
   const filters: (SQL | undefined)[] = [
     eq(optionStudies.dealershipId, actor.dealershipId),
@@ -50,12 +50,5 @@ export async function listStudies({
       .from(optionStudies)
       .where(where),
   ]);
-  const total = count?.n ?? 0;
-  return {
-    items: rows.map(toStudyRow),
-    page: q.page,
-    pageSize: q.pageSize,
-    total,
-    pageCount: Math.max(1, Math.ceil(total / q.pageSize)),
-  };
+  return toPage(rows.map(toStudyRow), count?.n ?? 0, q.page, q.pageSize);
 }

@@ -8,7 +8,7 @@ import {
   type TOptionSpec,
   type TSweepSpec,
 } from "@/lib/scrub";
-import { OptionsError } from "./errors";
+import { ApiError } from "@/features/platform";
 
 /** What a study freezes: the estimate's engine inputs plus the study's own request. */
 export type TStudyInputs =
@@ -44,7 +44,7 @@ export function runStudy(inputs: TStudyInputs) {
       bestCostPerHour: result.best ? finite(result.best.costPerHour) : null,
     };
   } catch (e) {
-    throw new OptionsError(
+    throw new ApiError(
       422,
       "study_failed",
       `The engine could not run this ${inputs.kind}: ${(e as Error).message}`,

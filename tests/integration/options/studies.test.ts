@@ -16,7 +16,7 @@ import {
   insertReadyDutyCycle,
   makeDealership,
   testTractorSpec,
-} from "../workspace/support";
+} from "@/tests/support/records";
 
 let team: Awaited<ReturnType<typeof makeDealership>>;
 let estimateId: string;

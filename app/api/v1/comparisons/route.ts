@@ -2,7 +2,7 @@ import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
 import { createStudy } from "@/features/options/server/create-study";
 import { listStudies } from "@/features/options/server/list-studies";
-import { queryOf, readBody, respond } from "@/features/options/server/respond";
+import { queryOf, readJson, respond } from "@/features/platform";
 import { toComparisonDto } from "@/features/options/server/study-dto";
 
 export const dynamic = "force-dynamic";
@@ -17,7 +17,7 @@ export const POST = withActor(({ req, actor }) =>
   respond(
     async () =>
       toComparisonDto(
-        await createStudy({ db: getDb(), actor, kind: "comparison", input: await readBody(req) }),
+        await createStudy({ db: getDb(), actor, kind: "comparison", input: await readJson(req) }),
       ),
     201,
   ),

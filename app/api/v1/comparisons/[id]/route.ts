@@ -1,7 +1,7 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
 import { getStudy } from "@/features/options/server/get-study";
-import { respond, studyId } from "@/features/options/server/respond";
+import { pathId, respond } from "@/features/platform";
 import { toComparisonDto } from "@/features/options/server/study-dto";
 
 export const dynamic = "force-dynamic";
@@ -13,7 +13,7 @@ export const GET = withActor(({ actor, params }) =>
         db: getDb(),
         actor,
         kind: "comparison",
-        id: studyId(params.id, "comparison"),
+        id: pathId(params.id, "comparison"),
       }),
     ),
   ),

@@ -1,7 +1,7 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
 import { rerunStudy } from "@/features/options/server/rerun-study";
-import { respond, studyId } from "@/features/options/server/respond";
+import { pathId, respond } from "@/features/platform";
 import { toComparisonDto } from "@/features/options/server/study-dto";
 
 export const dynamic = "force-dynamic";
@@ -15,7 +15,7 @@ export const POST = withActor(({ actor, params }) =>
           db: getDb(),
           actor,
           kind: "comparison",
-          id: studyId(params.id, "comparison"),
+          id: pathId(params.id, "comparison"),
         }),
       ),
     201,

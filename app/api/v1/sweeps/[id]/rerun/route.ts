@@ -1,7 +1,7 @@
 import { getDb } from "@/db/client";
 import { withActor } from "@/app/api/_lib/with-actor";
 import { rerunStudy } from "@/features/options/server/rerun-study";
-import { respond, studyId } from "@/features/options/server/respond";
+import { pathId, respond } from "@/features/platform";
 import { toSweepDto } from "@/features/options/server/study-dto";
 
 export const dynamic = "force-dynamic";
@@ -11,7 +11,7 @@ export const POST = withActor(({ actor, params }) =>
   respond(
     async () =>
       toSweepDto(
-        await rerunStudy({ db: getDb(), actor, kind: "sweep", id: studyId(params.id, "sweep") }),
+        await rerunStudy({ db: getDb(), actor, kind: "sweep", id: pathId(params.id, "sweep") }),
       ),
     201,
   ),
