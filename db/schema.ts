@@ -6,3 +6,4 @@ export * from "@/db/tables/accounts";
 export * from "@/db/tables/billing";
 export * from "@/db/tables/reports";
 export * from "@/db/tables/readings";
+export * from "@/db/tables/options";

@@ -27,8 +27,10 @@ export type TStoredTurn = {
   startTime: number | null;
 };
 
-export type TStraight = Omit<TStraightTravel, "frontDrive" | "ladenShare"> & {
+export type TStraight = Omit<TStraightTravel, "frontDrive" | "ladenShare" | "drawbarWork"> & {
   ladenShare: number;
+  /** Optional field blocks under drawbar pull (engine input; absent = free rolling). */
+  drawbarWork?: TStraightTravel["drawbarWork"];
 };
 
 /** Seconds spent in each speed band of SPEED_BIN_WIDTH m/s, from 0 up. */

@@ -39,3 +39,43 @@ export const HIGH_LATERAL_ACCELERATION = 2;
 
 /** Relative difference in wear rate between two swappable positions worth a rotation [J]. */
 export const ROTATION_THRESHOLD = 0.1;
+
+/**
+ * Exponent n of the base-wear load factor (W/W_rated)^n [C from Archard, J value]: Archard's law
+ * makes worn volume proportional to normal load × sliding distance, and the squirm sliding in
+ * the contact patch grows with contact length, i.e. with deflection, which load–pressure tables
+ * hold near constant at the rated load, so both factors scale with W/W_rated: n = 2. Override:
+ * options.wearCoefficients.loadWearExponent.
+ */
+export const LOAD_WEAR_EXPONENT = 2;
+
+/**
+ * Load ratio W/W_rated at which BASE_WEAR_MM_PER_KM applies (a typical working load) [J]; the
+ * base-wear load factor is (W/W_rated / LOAD_REFERENCE_RATIO)^n.
+ */
+export const LOAD_REFERENCE_RATIO = 0.7;
+
+/**
+ * Nominal rated load per tyre when neither a pressure rating nor a load capacity is entered:
+ * W ≈ k·b·D (kg, b section width and D overall diameter in mm) with k = 0.004 kg/mm² [J]. The
+ * value reproduces two load-index figures quoted from memory [M]: 380/85R28 133A8 ≈ 2060 kg
+ * and 460/85R38 149A8 ≈ 3250 kg. Display and default only; the maker's table governs.
+ */
+export const NOMINAL_RATED_LOAD_PER_MM2 = 0.004;
+
+/** Deflection at the rated load as a share of section height, radial ag tyres [trade practice, J]. */
+export const RATED_DEFLECTION_RATIO = 0.2;
+
+/**
+ * Rolling-resistance coefficient against speed, f_r = 0.0136 + 0.40·10⁻⁷·V² (V in km/h), the
+ * radial-ply form quoted in Wong, Theory of Ground Vehicles, ch. 1 [M: verify]. Drives the road
+ * drive slip; ag tyres roll harder than the car tyres the formula was fitted to, so the base term
+ * is scaled [J].
+ */
+export const ROLLING_RESISTANCE = { base: 0.0136, perKmh2: 0.4e-7, agTyreFactor: 2 } as const;
+
+/** Mean |acceleration| of speeding up and braking in road and yard travel (m/s²) [J]. */
+export const SPEED_CHANGE_ACCELERATION = 0.1;
+
+/** Default cone index of the soil surfaces (kPa), ASABE D497 order of magnitude [M]. */
+export const SOIL_CONE_INDEX = { "firm-soil": 1800, "loose-soil": 1200, grass: 1500 } as const;

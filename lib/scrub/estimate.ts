@@ -6,6 +6,7 @@ import {
   BASE_WEAR_MM_PER_KM,
   HIGH_LATERAL_ACCELERATION,
   LAND_RATIO,
+  LOAD_WEAR_EXPONENT,
   LONGITUDINAL_STIFFNESS_COEFFICIENT,
 } from "./coefficients";
 import { fastTurnKind } from "./fast-turn-kind";
@@ -32,7 +33,15 @@ import { resolveSurfaces } from "./surfaces";
 import { TurnCache } from "./turn-cache";
 import { emptyTurn, turnResult } from "./turn-result";
 import { ENGINE_VERSION } from "./version";
-import { accumulateTurn, addStraightTravel, newWearAccumulator, wearByPosition } from "./wear";
+import { straightTraction } from "./straight-traction";
+import { SURFACE_KINDS } from "./surfaces";
+import {
+  accumulateTurn,
+  addStraightTravel,
+  addTraction,
+  newWearAccumulator,
+  wearByPosition,
+} from "./wear";
 
 /** Duty cycle with its turn kinds left unparsed (validated one at a time in the loop). */
 const ZDutyCycleShell = ZDutyCycle.extend({ turns: z.array(z.unknown()) });
@@ -66,12 +75,16 @@ export function estimate(
   const options = parseOrExplain(ZEstimateOptions, optionsInput, "Estimate options");
   const pm = prepareMachine(machine);
   const surfaces = resolveSurfaces(dutyCycle.surfaces);
+  const fitted = options.wearCoefficients ?? {};
   const coefficients = {
-    abradability: options.abradability ?? ABRADABILITY,
-    baseWearPerKm: options.baseWearPerKm ?? BASE_WEAR_MM_PER_KM,
-    landRatio: options.landRatio ?? LAND_RATIO,
+    abradability: fitted.abradability ?? options.abradability ?? ABRADABILITY,
+    baseWearPerKm: fitted.baseWearPerKm ?? options.baseWearPerKm ?? BASE_WEAR_MM_PER_KM,
+    landRatio: fitted.landRatio ?? options.landRatio ?? LAND_RATIO,
     longitudinalStiffnessCoefficient:
-      options.longitudinalStiffnessCoefficient ?? LONGITUDINAL_STIFFNESS_COEFFICIENT,
+      fitted.longitudinalStiffnessCoefficient ??
+      options.longitudinalStiffnessCoefficient ??
+      LONGITUDINAL_STIFFNESS_COEFFICIENT,
+    loadWearExponent: fitted.loadWearExponent ?? LOAD_WEAR_EXPONENT,
   };
   const warnings: TWarning[] = [];
   const lead = machineLead(pm);
@@ -168,8 +181,17 @@ export function estimate(
   }
 
   addStraightTravel(pm, dutyCycle.straight, lead, surfaces, coefficients, acc);
+  straightTraction(
+    pm,
+    dutyCycle.straight,
+    surfaces,
+    SURFACE_KINDS,
+    coefficients.longitudinalStiffnessCoefficient,
+    warnings,
+    (wheel, surface, joules) => addTraction(acc, wheel, surface, joules),
+  );
 
-  const positions = wearByPosition(pm, acc, surfaces, coefficients);
+  const positions = wearByPosition(pm, acc, surfaces, coefficients, dutyCycle.straight.ladenShare);
   let first: TPositionResult | null = null;
   for (const p of positions) {
     if (

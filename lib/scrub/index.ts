@@ -46,3 +46,35 @@ export {
   type TSegmentOptions,
   type TTurnSegmenter,
 } from "./segment-turns";
+
+// Options: variants, comparisons and sweeps (docs/engine.md, "Options").
+export {
+  applyChanges,
+  parameterValue,
+  ratedLoadAtPressure,
+  PRESSURE_LOAD_EXPONENT,
+  SWEEP_PARAMETERS,
+  SWEEP_PARAMETER_UNITS,
+  ZMachineChange,
+  ZSweepParameter,
+  type TMachineChange,
+  type TSweepParameter,
+} from "./machine-changes";
+export {
+  sweepParameter,
+  ZSweepSpec,
+  type TSweepPoint,
+  type TSweepResult,
+  type TSweepSpec,
+} from "./sweep-parameter";
+export {
+  compareOptions,
+  ZCompareSettings,
+  ZOptionSpec,
+  type TComparisonResult,
+  type TOptionOutcome,
+  type TOptionPosition,
+  type TOptionSpec,
+} from "./compare-options";
+export { optionCautions } from "./option-cautions";
+export { brixiusRatios, mobilityNumber, solveTractionSlip } from "./traction";

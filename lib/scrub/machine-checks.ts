@@ -35,7 +35,8 @@ export function checkMachine(pm: PreparedMachine, lead: number | null, warnings:
     }
   }
   for (const axle of [pm.front, pm.rear]) {
-    const capacity = axle.axle.tyre.loadCapacity;
+    const capacity = axle.ratedLoadSource === "nominal" ? undefined : axle.ratedLoadKg;
+    const at = axle.axle.inflation ? ` at ${axle.axle.inflation.pressure} kPa` : "";
     if (axle.designationUnparsed) {
       warnings.push({
         code: "designation-unparsed",
@@ -53,7 +54,7 @@ export function checkMachine(pm: PreparedMachine, lead: number | null, warnings:
         warnings.push({
           code: "load-over-capacity",
           severity: "error",
-          message: `${axle.name} axle (${state}): ${wheelKg.toFixed(0)} kg per tyre exceeds the declared ${capacity} kg capacity. Fit tyres rated for the load at the working speed and pressure.`,
+          message: `${axle.name} axle (${state}): ${wheelKg.toFixed(0)} kg per tyre exceeds the declared ${capacity} kg capacity${at}. Fit tyres rated for the load at the working speed and pressure, or raise the pressure within the tyre maker's table.`,
         });
         if (axle.ladenKg === axle.unladenKg) break;
       }

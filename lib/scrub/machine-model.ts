@@ -1,5 +1,10 @@
 import { toRadians } from "./angles";
-import { CORNERING_STIFFNESS_COEFFICIENT, TREAD_WIDTH_FRACTION } from "./coefficients";
+import {
+  CORNERING_STIFFNESS_COEFFICIENT,
+  LOAD_REFERENCE_RATIO,
+  NOMINAL_RATED_LOAD_PER_MM2,
+  TREAD_WIDTH_FRACTION,
+} from "./coefficients";
 import { prepareTrapezoid } from "./linkage-outer-angle";
 import { estimateRollingCircumference } from "./rolling-circumference";
 import type { TAxle, TMachine, TSteering, TSteeringLayout } from "./schemas";
@@ -24,6 +29,13 @@ export interface PreparedAxle {
   /** Tread contact width (mm). */
   treadWidth: number;
   corneringStiffnessCoefficient: number;
+  /** Overall diameter, section width and section height (mm). */
+  overallDiameter: number;
+  sectionWidth: number;
+  sectionHeight: number;
+  /** Rated load of one tyre at its working pressure (kg), and where that figure came from. */
+  ratedLoadKg: number;
+  ratedLoadSource: "pressure-table" | "load-capacity" | "nominal";
   axle: TAxle;
   /** True when the designation could not be parsed and data-book values were used. */
   designationUnparsed: boolean;
@@ -59,8 +71,8 @@ export interface PreparedMachine {
 
 export function prepareMachine(machine: TMachine): PreparedMachine {
   const tracked = machine.steering.layout === "skid" && machine.steering.running === "tracked";
-  const front = prepareAxle("front", machine.axles.front, tracked);
-  const rear = prepareAxle("rear", machine.axles.rear, tracked);
+  const front = prepareAxle("front", machine.axles.front, tracked, machine.ballast?.front ?? 0);
+  const rear = prepareAxle("rear", machine.axles.rear, tracked, machine.ballast?.rear ?? 0);
   const steering =
     machine.steering.layout === "articulated"
       ? machine.steering.frontLength + machine.steering.rearLength
@@ -79,16 +91,23 @@ export function prepareMachine(machine: TMachine): PreparedMachine {
   };
 }
 
-function prepareAxle(name: "front" | "rear", axle: TAxle, tracked: boolean): PreparedAxle {
+function prepareAxle(
+  name: "front" | "rear",
+  axle: TAxle,
+  tracked: boolean,
+  ballastKg: number,
+): PreparedAxle {
   const tyre = axle.tyre;
   let overallDiameter = tyre.overallDiameter;
   let sectionWidth = tyre.sectionWidth;
+  let rimMm: number | undefined;
   let designationUnparsed = false;
   if (!tracked) {
     try {
       const dims = tyreDimensions(tyre.designation);
       overallDiameter ??= dims.overallDiameter;
       sectionWidth ??= dims.sectionWidth;
+      rimMm = dims.rimDiameter * 25.4;
     } catch (error) {
       if (overallDiameter === undefined || sectionWidth === undefined) {
         throw new Error(
@@ -104,13 +123,22 @@ function prepareAxle(name: "front" | "rear", axle: TAxle, tracked: boolean): Pre
     );
   }
   const pivotTrack = axle.pivotTrack ?? axle.track;
+  const diameter = overallDiameter ?? 1000;
+  const width = sectionWidth ?? 400;
+  const sectionHeight =
+    rimMm !== undefined && diameter > rimMm ? (diameter - rimMm) / 2 : 0.8 * width;
+  const ratedLoadSource = axle.inflation
+    ? "pressure-table"
+    : tyre.loadCapacity !== undefined
+      ? "load-capacity"
+      : "nominal";
   return {
     name,
     track: axle.track,
     pivotTrack,
     scrubRadius: (axle.track - pivotTrack) / 2,
-    unladenKg: axle.load,
-    ladenKg: axle.ladenLoad ?? axle.load,
+    unladenKg: axle.load + ballastKg,
+    ladenKg: (axle.ladenLoad ?? axle.load) + ballastKg,
     leftShare: axle.leftShare ?? 0.5,
     designation: tyre.designation,
     rollingCircumference:
@@ -118,6 +146,21 @@ function prepareAxle(name: "front" | "rear", axle: TAxle, tracked: boolean): Pre
     treadWidth: TREAD_WIDTH_FRACTION * (sectionWidth ?? 400),
     corneringStiffnessCoefficient:
       tyre.corneringStiffnessCoefficient ?? CORNERING_STIFFNESS_COEFFICIENT,
+    overallDiameter: diameter,
+    sectionWidth: width,
+    sectionHeight,
+    ratedLoadKg:
+      axle.inflation?.ratedLoad ??
+      tyre.loadCapacity ??
+      // No rating entered: the size's nominal rating, but never below what the heaviest wheel
+      // load needs at the reference ratio (the tyre is assumed fitted for its load).
+      Math.max(
+        NOMINAL_RATED_LOAD_PER_MM2 * width * diameter,
+        ((Math.max(axle.load, axle.ladenLoad ?? axle.load) + ballastKg) *
+          Math.max(axle.leftShare ?? 0.5, 1 - (axle.leftShare ?? 0.5))) /
+          LOAD_REFERENCE_RATIO,
+      ),
+    ratedLoadSource,
     axle,
     designationUnparsed,
   };

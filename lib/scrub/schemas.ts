@@ -31,6 +31,8 @@ export const ZSurfaceProperties = z.object({
   friction: z.number().positive().max(2),
   /** Multiplier on the tread wear coefficient; concrete/asphalt = 1 (dimensionless). */
   abrasion: z.number().nonnegative().max(20),
+  /** Cone index of soil (kPa) for the traction model (Brixius); ignored on hard ground. */
+  coneIndex: z.number().positive().max(10_000).optional(),
 });
 export type TSurfaceProperties = z.infer<typeof ZSurfaceProperties>;
 
@@ -83,6 +85,19 @@ export const ZAxle = z.object({
   leftShare: z.number().min(0.05).max(0.95).optional(),
   /** Tyres on this axle. */
   tyre: ZTyreFitment,
+  /**
+   * Working inflation pressure and the tyre maker's rated load per tyre at that pressure (and
+   * the working speed). Optional: without it the declared load capacity, or a nominal rating
+   * from the tyre size, is used (docs/engine.md, "Load and pressure").
+   */
+  inflation: z
+    .object({
+      /** Inflation pressure (kPa). */
+      pressure: z.number().positive().max(1000),
+      /** Rated load of one tyre at that pressure (kg), from the maker's load–pressure table. */
+      ratedLoad: z.number().positive(),
+    })
+    .optional(),
 });
 export type TAxle = z.infer<typeof ZAxle>;
 
@@ -233,6 +248,13 @@ export const ZMachine = z.object({
     .default({}),
   /** Calibrated wear coefficients k_h (mm/MJ) per position; replace the placeholder model. */
   wearCoefficients: ZWearCoefficients.optional(),
+  /** Ballast added to each axle (kg), on top of the unladen and laden loads. */
+  ballast: z
+    .object({
+      front: z.number().nonnegative().default(0),
+      rear: z.number().nonnegative().default(0),
+    })
+    .optional(),
 });
 export type TMachine = z.infer<typeof ZMachine>;
 export type TMachineInput = z.input<typeof ZMachine>;
@@ -299,6 +321,31 @@ export const ZStraightTravel = z.object({
   frontDrive: z.enum(["engaged", "disengaged"]).default("disengaged"),
   /** Share of straight distance travelled laden (0..1). */
   ladenShare: z.number().min(0).max(1).default(0),
+  /**
+   * Field blocks worked under drawbar pull (tillage, drilling, towing in the field). Each is a
+   * share of the straight distance on one soil surface with the implement draught (N) or the
+   * pull as a share of the machine's weight. Omitted: no drawbar work (free rolling).
+   */
+  drawbarWork: z
+    .array(
+      z
+        .object({
+          label: z.string().trim().max(120).optional(),
+          /** Share of the straight distance worked under this pull (0..1). */
+          distanceShare: z.number().min(0).max(1),
+          /** Soil the block is worked on. */
+          surface: ZSurfaceKind,
+          /** Implement draught at working speed (N). */
+          draught: z.number().nonnegative().max(500_000).optional(),
+          /** Alternative to draught: drawbar pull as a share of the machine's weight (0..0.8). */
+          pullShare: z.number().min(0).max(0.8).optional(),
+        })
+        .refine((b) => (b.draught === undefined) !== (b.pullShare === undefined), {
+          message: "Give either draught (N) or pullShare for each drawbar-work block, not both.",
+          path: ["draught"],
+        }),
+    )
+    .default([]),
 });
 export type TStraightTravel = z.infer<typeof ZStraightTravel>;
 
@@ -317,6 +364,24 @@ export type TDutyCycleInput = z.input<typeof ZDutyCycle>;
 // Estimate options
 // ---------------------------------------------------------------------------------------------
 
+/**
+ * The calibratable wear coefficients (all non-negative). Calibration fits them to measured tread
+ * loss and passes them as `options.wearCoefficients` to estimate / compareOptions / sweepParameter.
+ */
+export const ZWearModelCoefficients = z.object({
+  /** Abradability γ (mm³ of tread per J of frictional energy): scrub, wind-up and traction slip. */
+  abradability: z.number().positive().optional(),
+  /** Base rolling wear at rated load on concrete/asphalt (mm of tread per km). */
+  baseWearPerKm: z.number().nonnegative().optional(),
+  /** Exponent n of the load ratio (W/W_rated)^n on base wear. */
+  loadWearExponent: z.number().nonnegative().max(4).optional(),
+  /** Land/gross ratio of the tread contact (0..1). */
+  landRatio: z.number().positive().max(1).optional(),
+  /** Longitudinal slip stiffness per unit load (force per unit slip ratio per N). */
+  longitudinalStiffnessCoefficient: z.number().positive().optional(),
+});
+export type TWearModelCoefficients = z.infer<typeof ZWearModelCoefficients>;
+
 /** Overrides of the engine's placeholder coefficients (see docs/engine.md). */
 export const ZEstimateOptions = z.object({
   /** Abradability γ (mm³ of tread per J of frictional energy). */
@@ -329,6 +394,8 @@ export const ZEstimateOptions = z.object({
   longitudinalStiffnessCoefficient: z.number().positive().optional(),
   /** false drops the per-wheel detail of each turn (large imported duty cycles). */
   turnDetail: z.boolean().default(true),
+  /** Fitted wear coefficients (calibration); each overrides the same-named value above. */
+  wearCoefficients: ZWearModelCoefficients.optional(),
 });
 export type TEstimateOptions = z.input<typeof ZEstimateOptions>;
 
@@ -347,7 +414,10 @@ export type TWarningCode =
   | "designation-unparsed"
   | "solver-not-converged"
   | "tracks-wear-not-modelled"
-  | "high-lateral-acceleration";
+  | "high-lateral-acceleration"
+  | "traction-limit"
+  | "outside-limits"
+  | "option-not-applicable";
 
 export interface TWarning {
   code: TWarningCode;
@@ -420,10 +490,16 @@ export interface TTurnResult {
 export interface TPositionResult {
   position: TPosition;
   designation: string;
-  /** Frictional energy per operating hour (J/h). */
-  energyPerHour: { lateral: number; longitudinal: number; total: number };
-  /** Tread loss per 100 operating hours (mm). */
-  wearPer100h: { base: number; scrub: number; total: number };
+  /**
+   * Frictional energy per operating hour (J/h): lateral turn scrub, longitudinal (wind-up,
+   * locked differentials, skid slip), traction (drive/braking slip on roads, drawbar slip in
+   * the field); total is their sum.
+   */
+  energyPerHour: { lateral: number; longitudinal: number; traction: number; total: number };
+  /** Tread loss per 100 operating hours (mm): base rolling, turn scrub, traction slip. */
+  wearPer100h: { base: number; scrub: number; traction: number; total: number };
+  /** Wheel load relative to the tyre's rated load at its pressure (heavier side, mean of unladen/laden by distance). */
+  loadRatio: number;
   /** Wear coefficient used (mm per MJ at abrasion 1) and whether it was calibrated. */
   wearCoefficient: { value: number; calibrated: boolean };
   /** Hours until the replacement depth; null when no wear is predicted. */

@@ -73,6 +73,8 @@ type TRecords = {
   estimate: { id: string; title: string };
   report: { id: string; title: string };
   reading: { id: string; photoId: string };
+  comparison: { id: string; title: string };
+  sweep: { id: string; title: string };
 };
 
 async function seedRecords(dealershipId: string, label: string): Promise<TRecords> {
@@ -213,14 +215,37 @@ async function seedRecords(dealershipId: string, label: string): Promise<TRecord
       bytes: Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
     })
     .returning();
+  const [comparison, sweep] = await db
+    .insert(schema.optionStudies)
+    .values(
+      (["comparison", "sweep"] as const).map((kind) => {
+        const id = crypto.randomUUID();
+        return {
+          id,
+          seriesId: id,
+          kind,
+          dealershipId,
+          customerId: customer!.id,
+          machineId: machine!.id,
+          estimateId: estimate!.id,
+          title: `${label} ${kind} ${tag}`,
+          engineVersion: "0.0.0",
+          inputs: {},
+          result: { hours: 1, current: null, options: [], points: [] },
+        };
+      }),
+    )
+    .returning();
   return {
-    reading: { id: reading!.id, photoId: photo!.id },
+    comparison: { id: comparison!.id, title: comparison!.title },
+    sweep: { id: sweep!.id, title: sweep!.title },
     customer: { id: customer!.id, name: customer!.name },
     site: { id: site!.id, name: site!.name },
     machine: { id: machine!.id, name: machine!.name },
     dutyCycle: { id: dutyCycle!.id, name: dutyCycle!.name },
     estimate: { id: estimate!.id, title: estimate!.title },
     report: { id: report!.id, title: report!.title },
+    reading: { id: reading!.id, photoId: photo!.id },
   };
 }
 
@@ -259,6 +284,10 @@ function markersOf(r: TRecords): string[] {
     r.report.id,
     r.report.title,
     r.reading.id,
+    r.comparison.id,
+    r.comparison.title,
+    r.sweep.id,
+    r.sweep.title,
   ];
 }
 
@@ -414,6 +443,8 @@ const COLLECTION_IDS: Record<string, (w: TWorld) => string> = {
   "duty-cycles": (w) => w.home.other.dutyCycle.id,
   estimates: (w) => w.home.other.estimate.id,
   reports: (w) => w.home.other.report.id,
+  comparisons: (w) => w.home.other.comparison.id,
+  sweeps: (w) => w.home.other.sweep.id,
   "mapping-templates": (w) => w.home.templateId,
   readings: (w) => w.home.other.reading.id,
   "reading-photos": (w) => w.home.other.reading.photoId,

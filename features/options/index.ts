@@ -1,0 +1,15 @@
+/**
+ * Options: comparisons of machine variants and parameter sweeps, stored like estimates.
+ * Public entry for higher features (reports read comparisons through `readComparison`).
+ */
+export type {
+  TComparisonDto,
+  TSweepDto,
+  TStudyRow,
+  TStudyPage,
+  TStudyKind,
+  TComparisonCreate,
+  TSweepCreate,
+} from "./schemas/study";
+export { ZComparisonCreate, ZSweepCreate, ZStudyListQuery } from "./schemas/study";
+export { readComparison, readSweep } from "./server/read-study";
