@@ -68,7 +68,7 @@ export default async function DashboardPage() {
       </dl>
       <Card title="Recent estimates">
         <HydrationBoundary state={dehydrate(qc)}>
-          <EstimatesTable canRun={canRun} pageSize={10} />
+          <EstimatesTable currency={actor.currency} canRun={canRun} pageSize={10} />
         </HydrationBoundary>
       </Card>
       <Card title="Customers lately worked on">

@@ -14,10 +14,13 @@ import { formatDate, formatMoney, formatNumber, POSITION_LABELS } from "@/lib/fo
 export function EstimateResult({
   id,
   system,
+  currency,
   canWrite,
 }: {
   id: string;
   system: TUnitSystem;
+  /** The dealership's ISO 4217 currency. */
+  currency: string;
   canWrite: boolean;
 }) {
   const estimate = useEstimate(id);
@@ -78,7 +81,7 @@ export function EstimateResult({
         <div className="rounded-lg border border-ink-200 bg-white p-4">
           <dt className="text-sm text-ink-600">Tyre cost per operating hour</dt>
           <dd className="text-2xl font-bold text-ink-900" data-testid="cost-per-hour">
-            {formatMoney(r.costPerHour)}
+            {formatMoney(r.costPerHour, currency)}
           </dd>
         </div>
         <div className="rounded-lg border border-ink-200 bg-white p-4">
@@ -147,7 +150,7 @@ export function EstimateResult({
                   Hours to replacement
                 </th>
                 <th scope="col" className="px-3 py-2 text-right">
-                  Cost per hour
+                  Cost per hour ({currency})
                 </th>
               </tr>
             </thead>
@@ -171,7 +174,7 @@ export function EstimateResult({
                     {wear(p.wearPer100h.total).toFixed(wearDigits)}
                   </td>
                   <td className="px-3 py-2 text-right">{formatNumber(p.hoursToReplacement, 0)}</td>
-                  <td className="px-3 py-2 text-right">{formatMoney(p.costPerHour)}</td>
+                  <td className="px-3 py-2 text-right">{formatMoney(p.costPerHour, currency)}</td>
                 </tr>
               ))}
             </tbody>

@@ -48,7 +48,7 @@ function show(system: "metric" | "imperial") {
   return render(
     <AppRouterContext.Provider value={router as never}>
       <QueryClientProvider client={client}>
-        <EstimateResult id={dto.id} system={system} canWrite={false} />
+        <EstimateResult id={dto.id} system={system} currency="GBP" canWrite={false} />
       </QueryClientProvider>
     </AppRouterContext.Provider>,
   );
@@ -70,6 +70,19 @@ describe("estimate result page", () => {
       `/api/v1/estimates/${dto.id}/csv`,
     );
     expect(screen.queryByRole("button", { name: "Delete" })).toBeNull();
+  });
+
+  it("shows every amount with the dealership's currency (Intl.NumberFormat, en-GB)", () => {
+    show("metric");
+    const total = new Intl.NumberFormat("en-GB", { style: "currency", currency: "GBP" }).format(
+      result.costPerHour,
+    );
+    expect(screen.getByTestId("cost-per-hour").textContent).toBe(total);
+    expect(total.startsWith("£")).toBe(true);
+    const table = screen.getByTestId("positions-table");
+    expect(within(table).getByText("Cost per hour (GBP)")).toBeTruthy();
+    const cells = within(table).getAllByText(/^£\d/);
+    expect(cells).toHaveLength(result.positions.length);
   });
 
   it("shows tread wear in inches per 100 h to an imperial user (1 in = 25.4 mm, NIST SP 811)", () => {

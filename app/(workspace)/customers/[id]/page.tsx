@@ -26,7 +26,12 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
           <MachinesTable canWrite={canWrite} customerId={id} />
         </Card>
         <Card title="Estimates">
-          <EstimatesTable canRun={canWrite} customerId={id} pageSize={10} />
+          <EstimatesTable
+            currency={actor.currency}
+            canRun={canWrite}
+            customerId={id}
+            pageSize={10}
+          />
         </Card>
       </CustomerDetail>
     </HydrationBoundary>

@@ -17,7 +17,12 @@ export default async function EstimatePage({ params }: { params: Promise<{ id: s
   if (!isUuid(id) || !(await prefetchEstimate(qc, actor, id))) notFound();
   return (
     <HydrationBoundary state={dehydrate(qc)}>
-      <EstimateResult id={id} system={actor.unitSystem} canWrite={can(actor, "estimate:write")} />
+      <EstimateResult
+        id={id}
+        system={actor.unitSystem}
+        currency={actor.currency}
+        canWrite={can(actor, "estimate:write")}
+      />
     </HydrationBoundary>
   );
 }
