@@ -20,12 +20,18 @@ export const membershipRole = pgEnum("membership_role", [
 
 export const unitSystem = pgEnum("unit_system", ["metric", "imperial"]);
 
-export const dealerships = pgTable("dealerships", {
-  id: uuid().primaryKey().defaultRandom(),
-  name: text().notNull(),
-  slug: text().notNull().unique(),
-  createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
-});
+export const dealerships = pgTable(
+  "dealerships",
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    name: text().notNull(),
+    slug: text().notNull().unique(),
+    /** ISO 4217 code every amount of this dealership is priced and shown in. */
+    currency: text().notNull().default("EUR"),
+    createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [check("dealerships_currency_iso4217", sql`${t.currency} ~ '^[A-Z]{3}$'`)],
+);
 
 /** Column names follow what @auth/drizzle-adapter expects of a users table. */
 export const users = pgTable("users", {

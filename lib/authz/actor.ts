@@ -12,6 +12,8 @@ export type TActor = {
   /** For a customer account: the one customer record it may see. Null for staff. */
   customerId: string | null;
   unitSystem: "metric" | "imperial";
+  /** ISO 4217 code of the active dealership: every amount is shown in it. */
+  currency: string;
 };
 
 /** A resource as authorization sees it: which dealership owns it, and which customer it belongs to. */

@@ -1,11 +1,33 @@
 /** Display helpers shared by the workspace tables and pages. */
+export const DEFAULT_LOCALE = "en-GB";
+
 export const formatDate = (iso: string) =>
   new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
 
-export const formatMoney = (v: number | null | undefined, digits = 2) =>
-  v === null || v === undefined || !Number.isFinite(v)
+/**
+ * An amount with its currency (ISO 4217 code), in the reader's locale: "£1,234.50", "1.234,50 €".
+ * Digits follow the currency's own minor unit (two for GBP and EUR, none for JPY).
+ */
+export const formatMoney = (
+  amount: number | null | undefined,
+  currency: string,
+  locale: string = DEFAULT_LOCALE,
+) =>
+  amount === null || amount === undefined || !Number.isFinite(amount)
     ? "—"
-    : v.toLocaleString("en-GB", { minimumFractionDigits: digits, maximumFractionDigits: digits });
+    : new Intl.NumberFormat(locale, { style: "currency", currency }).format(amount);
+
+/** The currency's symbol in the locale ("£", "€", "US$"): for column headers and axis labels. */
+export const currencySymbol = (currency: string, locale: string = DEFAULT_LOCALE) =>
+  new Intl.NumberFormat(locale, { style: "currency", currency })
+    .formatToParts(0)
+    .find((p) => p.type === "currency")?.value ?? currency;
+
+/** Whether Intl knows the code as a currency (ISO 4217, upper case). */
+export function isSupportedCurrency(code: string): boolean {
+  if (!/^[A-Z]{3}$/.test(code)) return false;
+  return Intl.supportedValuesOf("currency").includes(code);
+}
 
 export const formatNumber = (v: number | null | undefined, digits = 1) =>
   v === null || v === undefined || !Number.isFinite(v)

@@ -1,4 +1,4 @@
-import type { TCaution } from "./schemas";
+import type { TCaution, TMachine, TSteeringLayout } from "./schemas";
 
 /**
  * Standing safety cautions shown with every estimate (PHYSICS.md §10: trade practice and
@@ -30,3 +30,26 @@ export const STANDING_CAUTIONS: readonly TCaution[] = [
     text: "Articulated, rear-steer and loader machines lose stability when steering with a raised load; rear-steer tail swing needs clearance.",
   },
 ];
+
+/** Layouts whose machines steer by the frame or the rear, or carry raised loads while steering. */
+const STABILITY_LAYOUTS: ReadonlySet<TSteeringLayout> = new Set([
+  "articulated",
+  "rear",
+  "four-wheel",
+  "crab",
+  "skid",
+]);
+
+/**
+ * The cautions that apply to this machine: the stability caution only where a layout it can
+ * steer in is articulated, rear, four-wheel, crab or skid; the lead caution only when the front
+ * axle is driven with a lead (lead not null). Every other standing caution always applies.
+ */
+export function cautionsFor(machine: TMachine, lead: number | null): TCaution[] {
+  const layouts = [machine.steering, ...(machine.otherSteeringModes ?? [])].map((s) => s.layout);
+  return STANDING_CAUTIONS.filter((c) => {
+    if (c.code === "stability") return layouts.some((l) => STABILITY_LAYOUTS.has(l));
+    if (c.code === "lead-matching") return lead !== null;
+    return true;
+  });
+}

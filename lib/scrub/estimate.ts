@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { toRadians } from "./angles";
-import { STANDING_CAUTIONS } from "./cautions";
+import { cautionsFor } from "./cautions";
 import {
   ABRADABILITY,
   BASE_WEAR_MM_PER_KM,
@@ -224,7 +224,7 @@ export function estimate(
     rotation: pm.machine.steering.layout === "skid" && isTracked(pm) ? [] : rotation,
     costPerHour: positions.reduce((sum, p) => sum + p.costPerHour, 0),
     warnings,
-    cautions: [...STANDING_CAUTIONS],
+    cautions: cautionsFor(pm.machine, lead),
     coefficients,
   };
 }

@@ -33,7 +33,7 @@ export { minimumTurningDiameter } from "./minimum-turning-diameter";
 
 // Defaults the UI may show next to user overrides.
 export { DEFAULT_SURFACES } from "./surfaces";
-export { STANDING_CAUTIONS } from "./cautions";
+export { cautionsFor, STANDING_CAUTIONS } from "./cautions";
 export * as ENGINE_COEFFICIENTS from "./coefficients";
 
 // Turn detection in telematics logs (docs/turn-detection.md).

@@ -138,6 +138,7 @@ async function fullIngest() {
     roles: ["estimator" as const],
     customerId: null,
     unitSystem: "metric" as const,
+    currency: "EUR",
   };
   await getImportSender(); // queue schema ready before the clock starts
 

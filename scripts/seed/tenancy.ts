@@ -3,10 +3,15 @@ import type { Db } from "@/db/client";
 import { dealerships, customers } from "@/db/schema";
 
 /** The invented dealership and its customers. Names are fictional. */
-export const DEMO_DEALERSHIP = { name: "Brackenridge Machinery", slug: "brackenridge" } as const;
+export const DEMO_DEALERSHIP = {
+  name: "Brackenridge Machinery",
+  slug: "brackenridge",
+  currency: "GBP",
+} as const;
 export const DEMO_RIVAL_DEALERSHIP = {
   name: "Copperfold Tractor & Plant",
   slug: "copperfold",
+  currency: "EUR",
 } as const;
 
 export const DEMO_CUSTOMERS = [
@@ -25,7 +30,8 @@ export const DEMO_CUSTOMERS = [
   },
 ] as const;
 
-async function upsertDealership(db: Db, d: { name: string; slug: string }) {
+// The currency is set only when the dealership is first made: a re-seed keeps the admin's choice.
+async function upsertDealership(db: Db, d: { name: string; slug: string; currency: string }) {
   const [row] = await db
     .insert(dealerships)
     .values(d)

@@ -83,6 +83,7 @@ export async function createTestMember(opts: {
     roles: [...roles],
     customerId: roles.includes("customer") ? customerId : null,
     unitSystem: user!.unitSystem,
+    currency: dealership.currency,
   };
   return { user: user!, dealership, cookie: await sessionCookieFor(user!), actor };
 }

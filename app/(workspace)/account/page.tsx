@@ -2,10 +2,11 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { redirect } from "next/navigation";
 import { getDb } from "@/db/client";
-import { ROLE_LABELS } from "@/lib/authz/policy";
+import { can, ROLE_LABELS } from "@/lib/authz/policy";
 import { Card } from "@/lib/ui/card";
 import {
   ActiveDealershipForm,
+  DealershipCurrencyForm,
   UnitPreferenceForm,
 } from "@/features/auth/components/account-settings";
 import { getActor } from "@/features/auth/server/get-actor";
@@ -41,6 +42,11 @@ export default async function AccountPage() {
       <Card title="Units">
         <UnitPreferenceForm unitSystem={actor.unitSystem} />
       </Card>
+      {can(actor, "staff:manage") ? (
+        <Card title={`Currency of ${active?.name ?? "this dealership"}`}>
+          <DealershipCurrencyForm currency={actor.currency} />
+        </Card>
+      ) : null}
       {dealerships.length > 1 ? (
         <Card title="Dealership">
           <ActiveDealershipForm activeId={actor.dealershipId} dealerships={dealerships} />

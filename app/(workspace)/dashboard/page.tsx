@@ -85,7 +85,7 @@ export default async function DashboardPage({
       <DashboardTread alerts={alerts} dueSoon={plan.dueSoon} />
       <Card title="Recent estimates">
         <HydrationBoundary state={dehydrate(qc)}>
-          <EstimatesTable canRun={canRun} pageSize={10} />
+          <EstimatesTable currency={actor.currency} canRun={canRun} pageSize={10} />
         </HydrationBoundary>
       </Card>
       <Card title="Customers lately worked on">

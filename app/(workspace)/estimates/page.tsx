@@ -30,7 +30,7 @@ export default async function EstimatesPage() {
         ) : null}
       </header>
       <HydrationBoundary state={dehydrate(qc)}>
-        <EstimatesTable canRun={canRun} />
+        <EstimatesTable currency={actor.currency} canRun={canRun} />
       </HydrationBoundary>
     </div>
   );

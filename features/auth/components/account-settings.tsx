@@ -3,9 +3,10 @@
 import { useActionState } from "react";
 import { Button } from "@/lib/ui/button";
 import { Field } from "@/lib/ui/field";
-import { Select } from "@/lib/ui/input";
+import { Input, Select } from "@/lib/ui/input";
 import { FormMessage } from "@/features/auth/components/auth-frame";
 import {
+  setDealershipCurrencyAction,
   setUnitSystemAction,
   switchDealershipAction,
 } from "@/features/auth/server/actions/session-actions";
@@ -58,6 +59,28 @@ export function ActiveDealershipForm({
       {state?.message ? <FormMessage ok={state.ok}>{state.message}</FormMessage> : null}
       <Button type="submit" variant="secondary" busy={pending} className="self-start">
         Switch dealership
+      </Button>
+    </form>
+  );
+}
+
+/** Dealer admin: the dealership's currency, used for every amount shown and exported. */
+export function DealershipCurrencyForm({ currency }: { currency: string }) {
+  const [state, action, pending] = useActionState(setDealershipCurrencyAction, undefined);
+  return (
+    <form action={action} className="flex flex-col gap-3" noValidate>
+      <Field
+        label="Currency"
+        hint="Three-letter ISO 4217 code (GBP, EUR, USD…). Tyre prices are entered and shown in it; amounts already stored are not converted."
+        error={state?.fieldErrors?.currency}
+      >
+        <Input name="currency" defaultValue={currency} maxLength={3} className="w-24 uppercase" />
+      </Field>
+      {state?.message && !state.fieldErrors ? (
+        <FormMessage ok={state.ok}>{state.message}</FormMessage>
+      ) : null}
+      <Button type="submit" variant="secondary" busy={pending} className="self-start">
+        Save currency
       </Button>
     </form>
   );

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
-import { memberships, users } from "@/db/schema";
+import { dealerships, memberships, users } from "@/db/schema";
 import type { TActor, TRole } from "@/lib/authz/actor";
 import type { TSessionClaims } from "@/features/auth/server/session-cookie";
 
@@ -18,9 +18,11 @@ function actorRows(db: DbOrTx) {
       dealershipId: memberships.dealershipId,
       role: memberships.role,
       customerId: memberships.customerId,
+      currency: dealerships.currency,
     })
     .from(users)
     .leftJoin(memberships, eq(memberships.userId, users.id))
+    .leftJoin(dealerships, eq(dealerships.id, memberships.dealershipId))
     .where(eq(users.id, sql.placeholder("userId")))
     .orderBy(asc(memberships.createdAt), asc(memberships.id));
 }
@@ -60,6 +62,7 @@ export async function loadActor(db: DbOrTx, claims: TSessionClaims): Promise<TAc
     roles: [...new Set(inActive.map((m) => m.role as TRole))],
     customerId: customerRow?.customerId ?? null,
     unitSystem: user.unitSystem,
+    currency: inActive[0]?.currency ?? "EUR",
   };
 }
 

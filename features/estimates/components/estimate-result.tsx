@@ -5,6 +5,7 @@ import { Card } from "@/lib/ui/card";
 import { Caution, EstimateSafetyCaution } from "@/lib/ui/caution";
 import { useDeleteEstimate, useEstimate } from "@/features/estimates/api/estimates";
 import { radiusBands } from "@/features/estimates/lib/radius-bands";
+import type { TCaution } from "@/lib/scrub";
 import { formatQuantity, fromSi, unitLabel, type TUnitSystem } from "@/lib/format/units";
 import { BarChart } from "@/lib/ui/bar-chart";
 import { DeleteButton } from "@/lib/ui/delete-button";
@@ -16,14 +17,40 @@ import {
   POSITION_LABELS,
 } from "@/lib/format/format";
 
+/** One short line with the standing caution; all general cautions one click away. */
+function CautionSummary({ cautions }: { cautions: TCaution[] }) {
+  return (
+    <details
+      className="rounded-md border-l-4 border-caution-300 bg-caution-50 px-4 py-2 text-sm text-caution-800"
+      data-testid="caution-summary"
+    >
+      <summary className="cursor-pointer">
+        <span className="font-medium">
+          Figures are estimates: loads, pressures and speeds come from the makers&apos; data.
+        </span>{" "}
+        <span className="underline">Read all {cautions.length + 1} cautions</span>
+      </summary>
+      <div className="mt-2 flex flex-col gap-2">
+        <EstimateSafetyCaution />
+        {cautions.map((c) => (
+          <Caution key={c.code} title={c.text} />
+        ))}
+      </div>
+    </details>
+  );
+}
+
 /** A stored estimate: per-position wear and cost, charts, the engine's warnings and the cautions. */
 export function EstimateResult({
   id,
   system,
+  currency,
   canWrite,
 }: {
   id: string;
   system: TUnitSystem;
+  /** The dealership's ISO 4217 currency. */
+  currency: string;
   canWrite: boolean;
 }) {
   const estimate = useEstimate(id);
@@ -38,6 +65,12 @@ export function EstimateResult({
   const e = estimate.data;
   const r = e.result;
   const bands = radiusBands(r);
+  // Cautions about one thing sit beside it; the rest fold into the one line at the top.
+  // A skid steer's wheels are all driven in fixed ratio: "front-axle lead" means nothing there.
+  const showLead = r.lead !== null && !r.turns.every((t) => t.steeringMode === "skid");
+  const stability = r.cautions.find((c) => c.code === "stability");
+  const leadCaution = showLead ? r.cautions.find((c) => c.code === "lead-matching") : undefined;
+  const general = r.cautions.filter((c) => c !== stability && c !== leadCaution);
   const wearUnit = unitLabel(system, "length-mm");
   const wear = (mm: number) => fromSi(system, "length-mm", mm);
   const wearDigits = system === "metric" ? 2 : 3;
@@ -58,6 +91,15 @@ export function EstimateResult({
             (version {e.machineVersion}) · {e.dutyCycleName} · {e.customerName ?? "no customer"} ·
             run {formatDate(e.createdAt)} · engine {e.engineVersion}
           </p>
+          {stability ? (
+            <p
+              role="note"
+              className="mt-1 text-sm text-caution-800"
+              data-testid="stability-caution"
+            >
+              {stability.text}
+            </p>
+          ) : null}
         </div>
         <div className="flex flex-wrap gap-2">
           <a
@@ -78,13 +120,13 @@ export function EstimateResult({
         </div>
       </header>
 
-      <EstimateSafetyCaution />
+      <CautionSummary cautions={general} />
 
       <dl className="grid gap-3 sm:grid-cols-3">
         <div className="rounded-lg border border-ink-200 bg-white p-4">
           <dt className="text-sm text-ink-600">Tyre cost per operating hour</dt>
           <dd className="text-2xl font-bold text-ink-900" data-testid="cost-per-hour">
-            {formatMoney(r.costPerHour)}
+            {formatMoney(r.costPerHour, currency)}
           </dd>
         </div>
         <div className="rounded-lg border border-ink-200 bg-white p-4">
@@ -98,12 +140,17 @@ export function EstimateResult({
               : ""}
           </dd>
         </div>
-        <div className="rounded-lg border border-ink-200 bg-white p-4">
-          <dt className="text-sm text-ink-600">Front axle lead in straight travel</dt>
-          <dd className="text-2xl font-bold text-ink-900">
-            {r.lead === null ? "Not four-wheel driven" : `${(r.lead * 100).toFixed(1)} %`}
-          </dd>
-        </div>
+        {showLead && r.lead !== null ? (
+          <div className="rounded-lg border border-ink-200 bg-white p-4" data-testid="lead-card">
+            <dt className="text-sm text-ink-600">Front axle lead in straight travel</dt>
+            <dd className="text-2xl font-bold text-ink-900">{(r.lead * 100).toFixed(1)} %</dd>
+            {leadCaution ? (
+              <dd role="note" className="mt-1 text-xs text-caution-800">
+                {leadCaution.text}
+              </dd>
+            ) : null}
+          </div>
+        ) : null}
       </dl>
 
       {r.warnings.length > 0 ? (
@@ -121,9 +168,6 @@ export function EstimateResult({
           ))}
         </section>
       ) : null}
-      {r.cautions.map((c) => (
-        <Caution key={c.code} title={c.text} />
-      ))}
 
       <Card title="Wear and cost by wheel position">
         <div className="overflow-x-auto">
@@ -153,7 +197,7 @@ export function EstimateResult({
                   Hours to replacement
                 </th>
                 <th scope="col" className="px-3 py-2 text-right">
-                  Cost per hour
+                  Cost per hour ({currency})
                 </th>
               </tr>
             </thead>
@@ -177,7 +221,7 @@ export function EstimateResult({
                     {wear(p.wearPer100h.total).toFixed(wearDigits)}
                   </td>
                   <td className="px-3 py-2 text-right">{formatNumber(p.hoursToReplacement, 0)}</td>
-                  <td className="px-3 py-2 text-right">{formatMoney(p.costPerHour)}</td>
+                  <td className="px-3 py-2 text-right">{formatMoney(p.costPerHour, currency)}</td>
                 </tr>
               ))}
             </tbody>

@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import type { ColumnDef } from "@tanstack/react-table";
 import type { TEstimateRow } from "@/features/estimates/schemas/estimate";
 import { useEstimates, DEFAULT_ESTIMATE_LIST } from "@/features/estimates/api/estimates";
@@ -10,7 +10,7 @@ import { ServerDataTable } from "@/lib/ui/server-data-table";
 import { formatDate, formatMoney, formatNumber, POSITION_LABELS } from "@/lib/format/format";
 import { EmptyState } from "@/lib/ui/empty-state";
 
-const columns: ColumnDef<TEstimateRow, unknown>[] = [
+const estimateColumns = (currency: string): ColumnDef<TEstimateRow, unknown>[] => [
   {
     id: "title",
     header: "Estimate",
@@ -39,8 +39,8 @@ const columns: ColumnDef<TEstimateRow, unknown>[] = [
   },
   {
     id: "costPerHour",
-    header: "Tyre cost per hour",
-    cell: ({ row }) => formatMoney(row.original.costPerHour),
+    header: `Tyre cost per hour (${currency})`,
+    cell: ({ row }) => formatMoney(row.original.costPerHour, currency),
   },
   {
     id: "hoursToFirstReplacement",
@@ -64,11 +64,14 @@ const columns: ColumnDef<TEstimateRow, unknown>[] = [
 
 export function EstimatesTable({
   canRun,
+  currency,
   customerId,
   machineId,
   pageSize,
 }: {
   canRun: boolean;
+  /** The dealership's ISO 4217 currency. */
+  currency: string;
   customerId?: string;
   machineId?: string;
   pageSize?: number;
@@ -79,6 +82,7 @@ export function EstimatesTable({
     filters: { ...(customerId ? { customerId } : {}), ...(machineId ? { machineId } : {}) },
   });
   const query = useEstimates(state);
+  const columns = useMemo(() => estimateColumns(currency), [currency]);
   return (
     <ServerDataTable
       caption="Estimates"

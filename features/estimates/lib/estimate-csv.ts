@@ -21,12 +21,20 @@ const HEADER = [
   "energy_per_hour_j",
 ];
 
+/** The money column names its currency, as the other columns name their unit. */
+const costHeader = (currency: string) => `position_cost_per_hour_${currency}`;
+
 const round = (v: number | null, digits = 4) =>
   v !== null && Number.isFinite(v) ? Number(v.toFixed(digits)) : null;
 
-/** One row per turn kind and wheel position (one row per turn when it has no wheel detail), SI units. */
-export function estimateTurnsCsv(result: TEstimateResult): string {
+/**
+ * One row per turn kind and wheel position (one row per turn when it has no wheel detail), SI
+ * units; the last column is that wheel position's tyre cost per operating hour over the whole
+ * duty cycle, in the dealership's currency.
+ */
+export function estimateTurnsCsv(result: TEstimateResult, currency: string): string {
   const rows: TCsvCell[][] = [];
+  const costOf = new Map(result.positions.map((p) => [p.position, p.costPerHour]));
   for (const t of result.turns) {
     const common: TCsvCell[] = [
       t.index + 1,
@@ -50,6 +58,7 @@ export function estimateTurnsCsv(result: TEstimateResult): string {
         null,
         round(t.energy, 1),
         round(t.energy * t.perHour, 1),
+        null,
       ]);
       continue;
     }
@@ -64,10 +73,11 @@ export function estimateTurnsCsv(result: TEstimateResult): string {
         round(w.longitudinalScrub),
         round(w.energy, 1),
         round(w.energy * t.perHour, 1),
+        round(costOf.get(w.position) ?? null, 4),
       ]);
     }
   }
-  return toCsv(HEADER, rows);
+  return toCsv([...HEADER, costHeader(currency)], rows);
 }
 
 /** A file name safe on every OS, from the estimate title. */

@@ -18,6 +18,6 @@ export async function exportEstimateCsv({
   const { estimate } = await loadEstimate(db, actor, id, "read");
   return {
     fileName: csvFileName(estimate.title),
-    csv: estimateTurnsCsv(estimate.result as TEstimateResult),
+    csv: estimateTurnsCsv(estimate.result as TEstimateResult, actor.currency),
   };
 }

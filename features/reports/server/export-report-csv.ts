@@ -26,7 +26,7 @@ export async function exportReportCsv({
   let header: string[] = [];
   const rows: string[][] = [];
   for (const option of content.options) {
-    const parsed = Papa.parse<string[]>(estimateTurnsCsv(option.result).trim(), {
+    const parsed = Papa.parse<string[]>(estimateTurnsCsv(option.result, content.currency).trim(), {
       skipEmptyLines: true,
     });
     const [head, ...body] = parsed.data;

@@ -24,7 +24,7 @@ vi.mock("next/cache", async (importOriginal) => ({
 const { getDb, getPool } = await import("@/db/client");
 const { memberships } = await import("@/db/schema");
 const { getActorFromRequest } = await import("@/features/auth/server/get-actor");
-const { setUnitSystemAction, switchDealershipAction } =
+const { setDealershipCurrencyAction, setUnitSystemAction, switchDealershipAction } =
   await import("@/features/auth/server/actions/session-actions");
 const { createTestDealership, createTestMember, requestAs } =
   await import("@/tests/support/session");
@@ -41,6 +41,34 @@ function form(values: Record<string, string>) {
 }
 
 describe("account actions", () => {
+  it("lets a dealer admin set the dealership's currency, refuses others and bad codes", async () => {
+    const admin = await createTestMember({ db, roles: ["dealer_admin"] });
+    const estimator = await createTestMember({
+      db,
+      roles: ["estimator"],
+      dealershipId: admin.dealership.id,
+    });
+    const currencyNow = async (cookie: string) =>
+      (await getActorFromRequest(requestAs(cookie, "/x")))?.currency;
+    expect(await currencyNow(admin.cookie)).toBe("EUR");
+
+    state.cookie = estimator.cookie;
+    const refused = await setDealershipCurrencyAction(undefined, form({ currency: "GBP" }));
+    expect(refused).toMatchObject({ ok: false, code: "forbidden" });
+    expect(await currencyNow(admin.cookie)).toBe("EUR");
+
+    state.cookie = admin.cookie;
+    const bad = await setDealershipCurrencyAction(undefined, form({ currency: "XQQ" }));
+    expect(bad).toMatchObject({ ok: false, code: "invalid_input" });
+    expect(bad.fieldErrors?.currency).toMatch(/ISO 4217/);
+    expect(await currencyNow(admin.cookie)).toBe("EUR");
+
+    const done = await setDealershipCurrencyAction(undefined, form({ currency: "gbp" }));
+    expect(done.ok).toBe(true);
+    // Everyone in the dealership now sees amounts in the new currency.
+    expect(await currencyNow(estimator.cookie)).toBe("GBP");
+  });
+
   it("switches the active dealership only to one the user belongs to", async () => {
     const m = await createTestMember({ db, roles: ["estimator"] });
     const second = await createTestDealership(db);

@@ -17,6 +17,7 @@ function actor(roles: TRole[], customerId: string | null = null): TActor {
     roles,
     customerId,
     unitSystem: "metric",
+    currency: "EUR",
   };
 }
 

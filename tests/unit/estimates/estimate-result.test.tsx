@@ -42,13 +42,13 @@ const dto: TEstimateDto = {
   result,
 };
 
-function show(system: "metric" | "imperial") {
+function show(system: "metric" | "imperial", shown: TEstimateDto = dto) {
   const client = new QueryClient();
-  client.setQueryData(estimateKeys.detail(dto.id), dto);
+  client.setQueryData(estimateKeys.detail(dto.id), shown);
   return render(
     <AppRouterContext.Provider value={router as never}>
       <QueryClientProvider client={client}>
-        <EstimateResult id={dto.id} system={system} canWrite={false} />
+        <EstimateResult id={dto.id} system={system} currency="GBP" canWrite={false} />
       </QueryClientProvider>
     </AppRouterContext.Provider>,
   );
@@ -70,6 +70,44 @@ describe("estimate result page", () => {
       `/api/v1/estimates/${dto.id}/csv`,
     );
     expect(screen.queryByRole("button", { name: "Delete" })).toBeNull();
+  });
+
+  it("shows every amount with the dealership's currency (Intl.NumberFormat, en-GB)", () => {
+    show("metric");
+    const total = new Intl.NumberFormat("en-GB", { style: "currency", currency: "GBP" }).format(
+      result.costPerHour,
+    );
+    expect(screen.getByTestId("cost-per-hour").textContent).toBe(total);
+    expect(total.startsWith("£")).toBe(true);
+    const table = screen.getByTestId("positions-table");
+    expect(within(table).getByText("Cost per hour (GBP)")).toBeTruthy();
+    const cells = within(table).getAllByText(/^£\d/);
+    expect(cells).toHaveLength(result.positions.length);
+  });
+
+  it("folds the general cautions into one line and puts each specific one beside its subject", () => {
+    show("metric");
+    const summary = screen.getByTestId("caution-summary");
+    expect(summary.tagName).toBe("DETAILS");
+    expect(summary.hasAttribute("open")).toBe(false);
+    expect(within(summary).getByText(/Read all \d+ cautions/)).toBeTruthy();
+    // A front-steer, four-wheel-driven tractor: the lead caution sits in the lead card, and
+    // there is no stability caution anywhere.
+    const lead = result.cautions.find((c) => c.code === "lead-matching")!;
+    expect(within(screen.getByTestId("lead-card")).getByText(lead.text)).toBeTruthy();
+    expect(within(summary).queryByText(lead.text)).toBeNull();
+    expect(screen.queryByTestId("stability-caution")).toBeNull();
+  });
+
+  it("hides the lead card on a skid steer and shows its stability caution by the title", () => {
+    const skid = DEMO_MACHINES.find((m) => m.machine.steering.layout === "skid")!;
+    const skidResult = estimate(skid.machine, DEMO_DUTY_CYCLES[skid.id]!);
+    show("metric", { ...dto, result: skidResult, machineName: skid.machine.name });
+    expect(screen.queryByTestId("lead-card")).toBeNull();
+    expect(screen.queryByText("Front axle lead in straight travel")).toBeNull();
+    const stability = skidResult.cautions.find((c) => c.code === "stability")!;
+    expect(screen.getByTestId("stability-caution").textContent).toBe(stability.text);
+    for (const c of skidResult.cautions) expect(screen.getByText(c.text)).toBeTruthy();
   });
 
   it("shows tread wear in inches per 100 h to an imperial user (1 in = 25.4 mm, NIST SP 811)", () => {

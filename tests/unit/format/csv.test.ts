@@ -47,10 +47,26 @@ describe("estimate turns CSV", () => {
   it("has one row per turn and wheel of a demo estimate", () => {
     const m = DEMO_MACHINES[0]!;
     const result = estimate(m.machine, DEMO_DUTY_CYCLES[m.id]!);
-    const parsed = Papa.parse<string[]>(estimateTurnsCsv(result), { skipEmptyLines: true }).data;
+    const parsed = Papa.parse<string[]>(estimateTurnsCsv(result, "GBP"), {
+      skipEmptyLines: true,
+    }).data;
     const wheels = result.turns.reduce((n, t) => n + Math.max(1, t.wheels.length), 0);
     expect(parsed).toHaveLength(1 + wheels);
     expect(parsed[0]).toContain("slip_angle_deg");
+  });
+
+  it("names the dealership's currency in the money column and fills it per position", () => {
+    const m = DEMO_MACHINES[0]!;
+    const result = estimate(m.machine, DEMO_DUTY_CYCLES[m.id]!);
+    const [head, ...rows] = Papa.parse<string[]>(estimateTurnsCsv(result, "GBP"), {
+      skipEmptyLines: true,
+    }).data;
+    const col = head!.indexOf("position_cost_per_hour_GBP");
+    expect(col).toBeGreaterThan(-1);
+    const pos = head!.indexOf("position");
+    const withWheel = rows.find((r) => r[pos] !== "")!;
+    const expected = result.positions.find((p) => p.position === withWheel[pos])!.costPerHour;
+    expect(Number(withWheel[col])).toBeCloseTo(expected, 3);
   });
 
   it("makes a safe file name", () => {

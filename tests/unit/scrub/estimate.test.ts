@@ -92,8 +92,28 @@ describe("estimate warnings and cautions", () => {
   it("carries the engine version and the standing cautions", () => {
     const result = estimate(testMachine(), oneTurn(lowSpeedTurn(8)));
     expect(result.engineVersion).toBe(ENGINE_VERSION);
-    expect(result.cautions).toEqual(STANDING_CAUTIONS);
+    const always = STANDING_CAUTIONS.filter(
+      (c) => !["stability", "lead-matching"].includes(c.code),
+    );
+    for (const c of always) expect(result.cautions).toContainEqual(c);
     expect(result.cautions.map((c) => c.code)).toContain("load-speed-pressure");
+  });
+
+  // Common practice, no source: frame-steer, rear-steer and skid machines carry the stability
+  // caution (tipping with a raised load, tail swing); a front-steer tractor does not.
+  it("shows cautions by layout: stability only for layouts it concerns", () => {
+    const byLayout = (layout: string) => {
+      const m = DEMO_MACHINES.find((d) => d.machine.steering.layout === layout)!;
+      return estimate(m.machine, DEMO_DUTY_CYCLES[m.id]!).cautions.map((c) => c.code);
+    };
+    expect(byLayout("trapezoid")).not.toContain("stability");
+    expect(byLayout("articulated")).toContain("stability");
+    expect(byLayout("skid")).toContain("stability");
+    expect(byLayout("rear")).toContain("stability");
+    for (const layout of ["trapezoid", "articulated", "skid", "rear"]) {
+      expect(byLayout(layout)).toContain("estimate-only");
+      expect(byLayout(layout)).toContain("mounting-hazard");
+    }
   });
 });
 

@@ -23,7 +23,12 @@ export default async function EstimatePage({ params }: { params: Promise<{ id: s
           <CreateReportButton estimateId={id} />
         </div>
       ) : null}
-      <EstimateResult id={id} system={actor.unitSystem} canWrite={can(actor, "estimate:write")} />
+      <EstimateResult
+        id={id}
+        system={actor.unitSystem}
+        currency={actor.currency}
+        canWrite={can(actor, "estimate:write")}
+      />
     </HydrationBoundary>
   );
 }

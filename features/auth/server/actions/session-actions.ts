@@ -9,7 +9,14 @@ import { can } from "@/lib/authz/policy";
 import { getActor } from "@/features/auth/server/get-actor";
 import { signOut } from "@/features/auth/server/auth-config";
 import { hasMembership } from "@/features/auth/server/load-actor";
-import { NOT_ALLOWED, SIGNED_OUT, type TActionState } from "@/features/auth/server/action-state";
+import {
+  invalidInput,
+  NOT_ALLOWED,
+  SIGNED_OUT,
+  type TActionState,
+} from "@/features/auth/server/action-state";
+import { ZDealershipCurrency } from "@/features/auth/schemas/dealership-currency";
+import { setDealershipCurrency } from "@/features/auth/server/set-dealership-currency";
 
 /** Ends the session (public: signing out is harmless for anyone). */
 export async function signOutAction(): Promise<void> {
@@ -68,4 +75,18 @@ export async function setUnitSystemAction(
     .where(eq(users.id, actor.userId));
   revalidatePath("/", "layout");
   return { ok: true, message: `Units set to ${parsed.data.unitSystem}.` };
+}
+
+/** Dealer admin: the currency the active dealership's amounts are shown in. */
+export async function setDealershipCurrencyAction(
+  _prev: TActionState | undefined,
+  formData: FormData,
+): Promise<TActionState> {
+  const actor = await getActor();
+  if (!actor) return SIGNED_OUT;
+  const parsed = ZDealershipCurrency.safeParse({ currency: formData.get("currency") ?? "" });
+  if (!parsed.success) return invalidInput(parsed.error);
+  const result = await setDealershipCurrency(getDb(), actor, parsed.data);
+  if (result.ok) revalidatePath("/", "layout");
+  return result;
 }
