@@ -45,7 +45,7 @@ export NEXT_TELEMETRY_DISABLED=1
 log "migrating database"
 node_modules/.bin/tsx scripts/migrate.ts
 log "seeding demo data"
-node_modules/.bin/tsx scripts/seed.ts
+node --conditions=react-server --import tsx scripts/seed.ts
 
 # Rebuild only when a source file is newer than the last build.
 if build_is_stale "${NEXT_DIST_DIR:-.next}"; then

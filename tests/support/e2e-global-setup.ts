@@ -25,7 +25,9 @@ export default async function setup() {
   if (!process.env.DATABASE_URL)
     throw new Error("DATABASE_URL is not set: run e2e tests through `npm test`.");
   execFileSync("node_modules/.bin/tsx", ["scripts/migrate.ts"], { stdio: "inherit" });
-  execFileSync("node_modules/.bin/tsx", ["scripts/seed.ts"], { stdio: "inherit" });
+  execFileSync("node", ["--conditions=react-server", "--import", "tsx", "scripts/seed.ts"], {
+    stdio: "inherit",
+  });
   const env = {
     ...process.env,
     APP_URL: `http://localhost:${port}`,

@@ -1,2 +1,0 @@
-ALTER TABLE "dealerships" ADD COLUMN "currency" text DEFAULT 'EUR' NOT NULL;--> statement-breakpoint
-ALTER TABLE "dealerships" ADD CONSTRAINT "dealerships_currency_iso4217" CHECK ("dealerships"."currency" ~ '^[A-Z]{3}$');
