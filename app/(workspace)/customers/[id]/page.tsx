@@ -28,7 +28,12 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
         {/* Estimates are the dealer's drafts: a customer account reads shared reports. */}
         {can(actor, "estimate:read") ? (
           <Card title="Estimates">
-            <EstimatesTable currency={actor.currency} canRun={canWrite} customerId={id} pageSize={10} />
+            <EstimatesTable
+              currency={actor.currency}
+              canRun={canWrite}
+              customerId={id}
+              pageSize={10}
+            />
           </Card>
         ) : null}
       </CustomerDetail>

@@ -39,7 +39,12 @@ export default async function MachinePage({ params }: { params: Promise<{ id: st
       >
         {can(actor, "estimate:read") ? (
           <Card title="Estimates for this machine">
-            <EstimatesTable currency={actor.currency} canRun={canRun} machineId={id} pageSize={10} />
+            <EstimatesTable
+              currency={actor.currency}
+              canRun={canRun}
+              machineId={id}
+              pageSize={10}
+            />
           </Card>
         ) : null}
       </MachineDetail>
