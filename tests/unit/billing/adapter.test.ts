@@ -16,8 +16,8 @@ import {
 
 const fake = createFakeStripe({ publicUrl: "https://pay.fake.test" });
 const server = setupServer(...stripeMswHandlers(fake));
-// No STRIPE_API_BASE: the adapter talks to the real host, which msw answers.
-const provider = billingProvider(createStripeClient({ apiBase: undefined, maxNetworkRetries: 0 }));
+// The real host, whatever STRIPE_API_BASE the test command exports: msw answers it.
+const provider = billingProvider(createStripeClient({ apiBase: "https://api.stripe.com", maxNetworkRetries: 0 }));
 const API = "https://api.stripe.com/v1";
 
 beforeAll(() => server.listen({ onUnhandledRequest: "error" }));
