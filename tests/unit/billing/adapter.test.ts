@@ -17,7 +17,9 @@ import {
 const fake = createFakeStripe({ publicUrl: "https://pay.fake.test" });
 const server = setupServer(...stripeMswHandlers(fake));
 // The real host, whatever STRIPE_API_BASE the test command exports: msw answers it.
-const provider = billingProvider(createStripeClient({ apiBase: "https://api.stripe.com", maxNetworkRetries: 0 }));
+const provider = billingProvider(
+  createStripeClient({ apiBase: "https://api.stripe.com", maxNetworkRetries: 0 }),
+);
 const API = "https://api.stripe.com/v1";
 
 beforeAll(() => server.listen({ onUnhandledRequest: "error" }));
