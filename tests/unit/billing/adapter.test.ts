@@ -187,7 +187,11 @@ describe("billing adapter", () => {
 
   it("a wrong key is reported as a configuration problem", async () => {
     const bad = billingProvider(
-      createStripeClient({ apiBase: undefined, secretKey: "rk_live_wrong", maxNetworkRetries: 0 }),
+      createStripeClient({
+        apiBase: "https://api.stripe.com",
+        secretKey: "rk_live_wrong",
+        maxNetworkRetries: 0,
+      }),
     );
     const e = await failure(() => bad.retrieveCustomer("cus_1"));
     expect(e.code).toBe("auth");
