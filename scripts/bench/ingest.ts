@@ -143,10 +143,14 @@ async function fullIngest() {
   await getImportSender(); // queue schema ready before the clock starts
 
   // The worker as its own process, as in production.
-  const worker = spawn(process.execPath, ["--import", "tsx", "scripts/worker.ts"], {
-    env: process.env,
-    stdio: ["ignore", "pipe", "inherit"],
-  });
+  const worker = spawn(
+    process.execPath,
+    ["--conditions=react-server", "--import", "tsx", "scripts/worker.ts"],
+    {
+      env: process.env,
+      stdio: ["ignore", "pipe", "inherit"],
+    },
+  );
   let workerLog = "";
   await new Promise<void>((resolve) =>
     worker.stdout!.on("data", (d: Buffer) => {

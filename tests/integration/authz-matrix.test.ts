@@ -608,6 +608,12 @@ const ACTION_FIXTURES: Record<string, TActionFixture> = {
     allowed: HOME_ROLES,
     selfOnly: true,
   },
+  "features/auth/server/actions/session-actions.ts#setDealershipCurrencyAction": {
+    args: () => [undefined, form({ currency: "EUR" })],
+    allowed: ["dealer_admin"],
+    // Acts only on the caller's active dealership (no ids in the input), so a rival admin may too.
+    selfOnly: true,
+  },
   "features/auth/server/actions/team-actions.ts#inviteMemberAction": {
     args: (w) => [
       undefined,

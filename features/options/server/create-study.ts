@@ -3,7 +3,7 @@ import { and, eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { estimates, optionStudies } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
-import type { TDutyCycleInput, TMachineInput } from "@/lib/scrub";
+import type { TDutyCycleInput, TEstimateOptions, TMachineInput } from "@/lib/scrub";
 import { ZComparisonCreate, ZSweepCreate, type TStudyKind } from "../schemas/study";
 import { can } from "@/lib/authz/policy";
 import { assertMayRun } from "./access";
@@ -40,17 +40,20 @@ export async function createStudy({
       estimateId: [message],
     });
   }
-  const frozen = source.inputs as { machine: TMachineInput; dutyCycle: TDutyCycleInput };
+  const frozen = source.inputs as {
+    machine: TMachineInput;
+    dutyCycle: TDutyCycleInput;
+    options?: TEstimateOptions;
+  };
+  const engine = {
+    machine: frozen.machine,
+    dutyCycle: frozen.dutyCycle,
+    engineOptions: frozen.options ?? {},
+  };
   const inputs: TStudyInputs =
     "options" in body
-      ? {
-          kind: "comparison",
-          machine: frozen.machine,
-          dutyCycle: frozen.dutyCycle,
-          options: body.options,
-          hours: body.hours,
-        }
-      : { kind: "sweep", machine: frozen.machine, dutyCycle: frozen.dutyCycle, sweep: body.sweep };
+      ? { kind: "comparison", ...engine, options: body.options, hours: body.hours }
+      : { kind: "sweep", ...engine, sweep: body.sweep };
   const run = runStudy(inputs);
   const id = crypto.randomUUID();
   const [row] = await db

@@ -4,28 +4,32 @@ import {
   ENGINE_VERSION,
   sweepParameter,
   type TDutyCycleInput,
+  type TEstimateOptions,
   type TMachineInput,
   type TOptionSpec,
   type TSweepSpec,
 } from "@/lib/scrub";
 import { ApiError } from "@/features/platform";
 
-/** What a study freezes: the estimate's engine inputs plus the study's own request. */
+/**
+ * What a study freezes: the estimate's engine inputs (with its engine options, so a study of a
+ * calibrated estimate runs calibrated too) plus the study's own request.
+ */
+type TFrozenEngineInputs = {
+  machine: TMachineInput;
+  dutyCycle: TDutyCycleInput;
+  engineOptions?: TEstimateOptions;
+};
 export type TStudyInputs =
-  | {
-      kind: "comparison";
-      machine: TMachineInput;
-      dutyCycle: TDutyCycleInput;
-      options: TOptionSpec[];
-      hours: number;
-    }
-  | { kind: "sweep"; machine: TMachineInput; dutyCycle: TDutyCycleInput; sweep: TSweepSpec };
+  | (TFrozenEngineInputs & { kind: "comparison"; options: TOptionSpec[]; hours: number })
+  | (TFrozenEngineInputs & { kind: "sweep"; sweep: TSweepSpec });
 
 /** Runs the engine for frozen inputs; the engine's refusals become a 422 that says what to fix. */
 export function runStudy(inputs: TStudyInputs) {
   try {
     if (inputs.kind === "comparison") {
       const result = compareOptions(inputs.machine, inputs.dutyCycle, inputs.options, {
+        ...inputs.engineOptions,
         hours: inputs.hours,
       });
       const costs = result.options.filter((o) => o.feasible).map((o) => o.costPerHour);
@@ -36,7 +40,12 @@ export function runStudy(inputs: TStudyInputs) {
         bestCostPerHour: costs.length > 0 ? finite(Math.min(...costs)) : null,
       };
     }
-    const result = sweepParameter(inputs.machine, inputs.dutyCycle, inputs.sweep);
+    const result = sweepParameter(
+      inputs.machine,
+      inputs.dutyCycle,
+      inputs.sweep,
+      inputs.engineOptions,
+    );
     return {
       engineVersion: ENGINE_VERSION,
       result,

@@ -41,10 +41,14 @@ function longLog(): string {
 }
 
 function startWorkerProcess(): Promise<ChildProcess> {
-  const proc = spawn("node", ["--import", "tsx", "scripts/worker.ts"], {
-    env: { ...process.env },
-    stdio: ["ignore", "pipe", "inherit"],
-  });
+  const proc = spawn(
+    "node",
+    ["--conditions=react-server", "--import", "tsx", "scripts/worker.ts"],
+    {
+      env: { ...process.env },
+      stdio: ["ignore", "pipe", "inherit"],
+    },
+  );
   return new Promise((resolve, reject) => {
     proc.stdout!.on("data", (d: Buffer) => {
       if (d.toString().includes("waiting for duty-cycle imports")) resolve(proc);

@@ -1,6 +1,11 @@
 // Comparisons and sweeps API: the real engine through real route handlers on real PostgreSQL.
 import { beforeAll, describe, expect, it } from "vitest";
-import { compareOptions, type TDutyCycleInput, type TMachineInput } from "@/lib/scrub";
+import {
+  compareOptions,
+  ENGINE_COEFFICIENTS,
+  type TDutyCycleInput,
+  type TMachineInput,
+} from "@/lib/scrub";
 import { POST as createCustomer } from "@/app/api/v1/customers/route";
 import { POST as createMachine } from "@/app/api/v1/machines/route";
 import { POST as createEstimate } from "@/app/api/v1/estimates/route";
@@ -20,7 +25,6 @@ import {
 
 let team: Awaited<ReturnType<typeof makeDealership>>;
 let estimateId: string;
-let otherEstimateId: string;
 let customerId: string;
 
 const options = [
@@ -59,10 +63,8 @@ beforeAll(async () => {
     return { customer, estimate: est.body.id as string };
   };
   const a = await setup("Tarnbeck Farm");
-  const b = await setup("Ashcombe Holdings");
   customerId = a.customer;
   estimateId = a.estimate;
-  otherEstimateId = b.estimate;
 });
 
 describe("comparisons API", () => {
@@ -147,33 +149,53 @@ describe("comparisons API", () => {
     expect(after).toBe(before);
   });
 
-  it("a customer account reads only its own customer's comparisons", async () => {
+  it("runs with the source estimate's engine options, so a calibrated estimate's study is calibrated", async () => {
+    const { estimates } = await import("@/db/schema");
+    const { eq } = await import("drizzle-orm");
+    const [est] = await db.select().from(estimates).where(eq(estimates.id, estimateId));
+    const frozen = est!.inputs as { machine: TMachineInput; dutyCycle: TDutyCycleInput };
+    // As a calibration stores it: base wear scaled by a fitted multiplier of 2.
+    const engineOptions = { baseWearPerKm: ENGINE_COEFFICIENTS.BASE_WEAR_MM_PER_KM * 2 };
+    const { id: _id, createdAt: _c, ...copy } = est!;
+    const [scaled] = await db
+      .insert(estimates)
+      .values({ ...copy, title: "scaled", inputs: { ...frozen, options: engineOptions } })
+      .returning({ id: estimates.id });
+    const res = await call(createComparison, team.estimator.cookie, "/api/v1/comparisons", {
+      method: "POST",
+      body: { estimateId: scaled!.id, options, hours: 1500 },
+    });
+    expect(res.status).toBe(201);
+    const withOptions = compareOptions(frozen.machine, frozen.dutyCycle, options as never, {
+      ...engineOptions,
+      hours: 1500,
+    });
+    const without = compareOptions(frozen.machine, frozen.dutyCycle, options as never, {
+      hours: 1500,
+    });
+    expect(res.body.result.current.costPerHour).toBeCloseTo(withOptions.current.costPerHour, 9);
+    expect(res.body.result.current.costPerHour).not.toBeCloseTo(without.current.costPerHour, 6);
+  });
+
+  it("a customer account reads no comparison directly: the dealer shares it as a quote report", async () => {
     const mine = await call(createComparison, team.admin.cookie, "/api/v1/comparisons", {
       method: "POST",
       body: { estimateId, options },
     });
-    const theirs = await call(createComparison, team.admin.cookie, "/api/v1/comparisons", {
-      method: "POST",
-      body: { estimateId: otherEstimateId, options },
-    });
+    expect(mine.status).toBe(201);
     const me = await createTestMember({
       db,
       roles: ["customer"],
       dealershipId: team.dealershipId,
       customerId,
     });
+    // Even the customer's own comparison is the dealer's working material until shared.
     const own = await call(getComparison, me.cookie, `/api/v1/comparisons/${mine.body.id}`, {
       params: { id: mine.body.id },
     });
-    expect(own.status).toBe(200);
-    const other = await call(getComparison, me.cookie, `/api/v1/comparisons/${theirs.body.id}`, {
-      params: { id: theirs.body.id },
-    });
-    expect(other.status).toBe(404);
+    expect(own.status).toBe(404);
     const listed = await call(listComparisons, me.cookie, "/api/v1/comparisons?pageSize=100");
-    expect(
-      listed.body.items.every((r: { customerId: string }) => r.customerId === customerId),
-    ).toBe(true);
+    expect(listed.status).toBe(404);
     const create = await call(createComparison, me.cookie, "/api/v1/comparisons", {
       method: "POST",
       body: { estimateId, options },
