@@ -2,14 +2,14 @@
 // large upload bodies). Two jobs: send signed-out visitors of signed-in pages to /sign-in, and
 // give each page response a Content-Security-Policy with a fresh script nonce. The redirect is
 // not authorization: every route handler, server action and page still checks the policy.
-import { NextResponse } from "next/server";
-import { auth } from "@/features/auth/server/auth-config";
+import { NextResponse, type NextFetchEvent, type NextRequest } from "next/server";
+import { proxyAuth } from "@/features/auth/server/proxy-auth";
 import { pageCsp } from "@/lib/platform/security-headers.mjs";
 
 /** Pages a signed-out visitor may open: home, sign-in, invitation, password reset, dev pages. */
 const PUBLIC_PAGE = /^\/(?:$|sign-in(?:\/|$)|invite\/|reset-password(?:\/|$)|dev\/)/;
 
-export const proxy = auth((req) => {
+const withSession: unknown = proxyAuth((req) => {
   const { pathname } = req.nextUrl;
   if (!req.auth?.user && !PUBLIC_PAGE.test(pathname)) {
     const signIn = req.nextUrl.clone();
@@ -30,6 +30,17 @@ export const proxy = auth((req) => {
   if (pathname !== "/") res.headers.set("X-Robots-Tag", "noindex, nofollow");
   return res;
 });
+
+type TProxyHandler = (req: NextRequest, ev: NextFetchEvent) => Promise<Response | undefined>;
+
+/**
+ * Auth.js hands back the wrapped handler as a promise when its configuration is lazy (read per
+ * request, so the build needs no secrets); Next needs a function here, so await it per call.
+ */
+export async function proxy(req: NextRequest, ev: NextFetchEvent) {
+  const handler = (await withSession) as TProxyHandler;
+  return handler(req, ev);
+}
 
 export const config = {
   // Every page; not API routes, Next's assets or files with an extension (public/). A new page

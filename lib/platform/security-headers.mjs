@@ -10,7 +10,7 @@ export const SECURITY_HEADERS = [
   {
     key: "Permissions-Policy",
     value:
-      "camera=(), microphone=(), geolocation=(), payment=(), usb=(), serial=(), bluetooth=(), interest-cohort=()",
+      "camera=(), microphone=(), geolocation=(), payment=(), usb=(), serial=(), interest-cohort=()",
   },
 ];
 

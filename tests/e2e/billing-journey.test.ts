@@ -41,7 +41,10 @@ describe("report plan billing", () => {
 
   it("the decline card shows a clear failure and grants nothing", async () => {
     await admin.goto(`${baseUrl}/billing`);
-    await admin.getByTestId("allowance-counter").getByText("Trial").waitFor();
+    await admin
+      .getByTestId("allowance-counter")
+      .getByText("Starter trial", { exact: true })
+      .waitFor();
     await admin
       .getByRole("listitem", { name: "Yard monthly" })
       .getByRole("button", { name: "Subscribe" })
@@ -54,7 +57,10 @@ describe("report plan billing", () => {
       .waitFor();
     await admin.getByRole("link", { name: "Cancel and go back to Treadcast" }).click();
     await admin.getByText("Checkout was not finished").waitFor();
-    await admin.getByTestId("allowance-counter").getByText("Trial").waitFor();
+    await admin
+      .getByTestId("allowance-counter")
+      .getByText("Starter trial", { exact: true })
+      .waitFor();
     const [account] = await db
       .select()
       .from(billingAccounts)

@@ -85,11 +85,14 @@ describe("security headers", () => {
     );
     expect(seen.filter((t) => /Content Security Policy/i.test(t))).toEqual([]);
     cspViolationsSeenOnPurpose(page);
+    // Markup injected the way a stored-XSS payload would arrive: an inline event handler.
+    // (A script element created from a trusted script is allowed by 'strict-dynamic' by design.)
     await page.evaluate(() => {
-      const s = document.createElement("script");
-      s.textContent = "window.__injected = 1";
-      document.body.append(s);
+      const d = document.createElement("div");
+      d.innerHTML = '<img src="/no-such-picture.png" onerror="window.__injected = 1">';
+      document.body.append(d);
     });
+    await page.waitForTimeout(500);
     expect(await page.evaluate(() => (window as { __injected?: number }).__injected)).toBe(
       undefined,
     );

@@ -62,6 +62,12 @@ describe("npm start supervisor", () => {
     expect(worker).toBeGreaterThan(0);
     expect(fakes).toBeGreaterThan(0);
 
+    // Killed once it is ready, so the second "waiting" line below can only be the new worker's.
+    await until(
+      () => output.includes("waiting for duty-cycle imports"),
+      "the first worker to be ready",
+      60_000,
+    );
     process.kill(worker!, "SIGKILL");
     process.kill(fakes!, "SIGKILL");
     // While they are down and coming back, the app keeps answering.
