@@ -172,12 +172,29 @@ export function ReportView({
             <dd className="text-xl font-bold">
               {option.baseline
                 ? "Baseline"
-                : option.paybackHours === null
-                  ? "Does not pay back"
-                  : formatHours(option.paybackHours)}
+                : option.feasible === false
+                  ? "Not workable"
+                  : option.paybackHours === null
+                    ? "Does not pay back"
+                    : formatHours(option.paybackHours)}
             </dd>
           </div>
         </dl>
+        {option.feasible === false ? (
+          <div className="mb-3">
+            <Caution
+              tone="danger"
+              title="Not workable as priced: it overloads a tyre or adds a turn the machine cannot make at this duty cycle."
+            />
+          </div>
+        ) : null}
+        {option.reasons?.length ? (
+          <ul className="mb-3 list-disc pl-5 text-sm text-ink-800" aria-label="Why it differs">
+            {option.reasons.map((r, i) => (
+              <li key={i}>{r}</li>
+            ))}
+          </ul>
+        ) : null}
         <div className="overflow-x-auto">
           <table className="min-w-full divide-y divide-ink-200 text-sm">
             <caption className="sr-only">Tyre life and cost by position</caption>
@@ -234,6 +251,11 @@ export function ReportView({
         {option.warnings.map((w, i) => (
           <div key={i} className="mt-2">
             <Caution title={w} />
+          </div>
+        ))}
+        {option.cautions?.map((x) => (
+          <div key={x.code} className="mt-2">
+            <Caution title="Before making this change">{x.text}</Caution>
           </div>
         ))}
       </Card>

@@ -190,9 +190,25 @@ function OptionDetail({ o, c, system }: { o: TReportOption; c: TReportContent; s
               o.paybackHours === null ? "never at this duty cycle" : formatHours(o.paybackHours)
             }`}
       </Text>
+      {o.feasible === false ? (
+        <Text style={[s.caution, { marginTop: 3, fontWeight: 700 }]}>
+          Not workable as priced: it overloads a tyre or adds a turn the machine cannot make at this
+          duty cycle.
+        </Text>
+      ) : null}
+      {o.reasons?.map((r, i) => (
+        <Text key={i} style={{ marginTop: 2 }}>
+          • {r}
+        </Text>
+      ))}
       {o.warnings.map((w, i) => (
         <Text key={i} style={[s.caution, { marginTop: 3 }]}>
           {w}
+        </Text>
+      ))}
+      {o.cautions?.map((x) => (
+        <Text key={x.code} style={[s.caution, { marginTop: 3 }]}>
+          Before making this change: {x.text}
         </Text>
       ))}
       {o.rotation.map((r, i) => (
@@ -277,7 +293,13 @@ export function ReportDocument({
               `${money(o.costPerHour)}/h`,
               o.baseline ? "—" : money(o.oneOffCost),
               o.baseline ? "baseline" : `${money(o.savingPerHour)}/h`,
-              o.baseline ? "—" : o.paybackHours === null ? "never" : formatHours(o.paybackHours),
+              o.baseline
+                ? "—"
+                : o.feasible === false
+                  ? "not workable"
+                  : o.paybackHours === null
+                    ? "never"
+                    : formatHours(o.paybackHours),
             ])}
           />
         ) : null}
