@@ -169,7 +169,7 @@ export function ReportView({
           </div>
           <div className="rounded-md bg-ink-50 p-3">
             <dt className="text-xs text-ink-600">Payback</dt>
-            <dd className="text-xl font-bold">
+            <dd className="text-xl font-bold" data-testid="option-payback">
               {option.baseline
                 ? "Baseline"
                 : option.feasible === false
