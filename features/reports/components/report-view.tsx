@@ -11,6 +11,7 @@ import {
   formatLength,
   formatMass,
   formatReportMoney,
+  formatReportRate,
   formatSpeed,
   LAYOUT_NAMES,
   POSITION_NAMES,
@@ -49,6 +50,7 @@ export function ReportView({
   const v = query.data;
   const c = v.content;
   const money = (x: number | null) => formatReportMoney(x, c.currency);
+  const rate = (x: number | null) => formatReportRate(x, c.currency);
   const option: TReportOption =
     c.options.find((o) => o.key === (picked ?? c.recommendedKey)) ?? c.options[0]!;
   const base = `/api/v1/reports/${reportId}/versions/${v.version}`;
@@ -115,7 +117,7 @@ export function ReportView({
             value: o.costPerHour,
             highlight: o.key === c.recommendedKey,
           }))}
-          format={(x) => `${money(x)}/h`}
+          format={(x) => rate(x)}
         />
       </Card>
 
@@ -158,7 +160,7 @@ export function ReportView({
           <div className="rounded-md bg-ink-50 p-3">
             <dt className="text-xs text-ink-600">Tyre cost per operating hour</dt>
             <dd className="text-xl font-bold" data-testid="option-cost">
-              {money(option.costPerHour)}/h
+              {rate(option.costPerHour)}
             </dd>
           </div>
           <div className="rounded-md bg-ink-50 p-3">
@@ -235,7 +237,7 @@ export function ReportView({
                   </td>
                   <td className="px-3 py-2 text-right">{formatHours(p.hoursToReplacement)}</td>
                   <td className="px-3 py-2 text-right">{money(p.replacementCost)}</td>
-                  <td className="px-3 py-2 text-right">{money(p.costPerHour)}/h</td>
+                  <td className="px-3 py-2 text-right">{rate(p.costPerHour)}</td>
                 </tr>
               ))}
             </tbody>

@@ -16,6 +16,7 @@ import {
   formatLength,
   formatMass,
   formatReportMoney,
+  formatReportRate,
   formatSpeed,
   LAYOUT_NAMES,
   POSITION_NAMES,
@@ -144,9 +145,11 @@ function BarsChart({
 
 function OptionDetail({ o, c, system }: { o: TReportOption; c: TReportContent; system: TSystem }) {
   const money = (v: number | null) => formatReportMoney(v, c.currency);
+  const rate = (v: number | null) => formatReportRate(v, c.currency);
   return (
     <View>
-      <Text style={s.h2}>
+      {/* Keep an option's heading on the page with the start of its tables. */}
+      <Text style={s.h2} minPresenceAhead={120}>
         {o.label}
         {o.key === c.recommendedKey && c.options.length > 1 ? " (lowest cost per hour)" : ""}
       </Text>
@@ -179,14 +182,14 @@ function OptionDetail({ o, c, system }: { o: TReportOption; c: TReportContent; s
           formatDepth(system, p.wearPer100h.total),
           formatHours(p.hoursToReplacement),
           money(p.replacementCost),
-          `${money(p.costPerHour)}/h`,
+          rate(p.costPerHour),
         ])}
       />
       <Text style={{ marginTop: 4, fontWeight: 700 }}>
-        Tyre cost per operating hour: {money(o.costPerHour)}/h
+        Tyre cost per operating hour: {rate(o.costPerHour)}
         {o.baseline
           ? ""
-          : ` · one-off cost ${money(o.oneOffCost)} · saving ${money(o.savingPerHour)}/h · payback ${
+          : ` · one-off cost ${money(o.oneOffCost)} · saving ${rate(o.savingPerHour)} · payback ${
               o.paybackHours === null ? "never at this duty cycle" : formatHours(o.paybackHours)
             }`}
       </Text>
@@ -237,6 +240,7 @@ export function ReportDocument({
   system: TSystem;
 }) {
   const money = (v: number | null) => formatReportMoney(v, c.currency);
+  const rate = (v: number | null) => formatReportRate(v, c.currency);
   const ref = `Report ${reportId.slice(0, 8).toUpperCase()} · version ${version}`;
   const turnRows = c.options[0]!.result.turns.slice(0, 40);
   const dc = c.dutyCycle;
@@ -282,7 +286,7 @@ export function ReportDocument({
             value: o.costPerHour,
             highlight: o.key === c.recommendedKey,
           }))}
-          format={(v) => `${money(v)}/h`}
+          format={(v) => rate(v)}
         />
         {c.options.length > 1 ? (
           <Table
@@ -290,9 +294,9 @@ export function ReportDocument({
             head={["Option", "Cost per hour", "One-off cost", "Saving per hour", "Payback"]}
             rows={c.options.map((o) => [
               o.label,
-              `${money(o.costPerHour)}/h`,
+              rate(o.costPerHour),
               o.baseline ? "—" : money(o.oneOffCost),
-              o.baseline ? "baseline" : `${money(o.savingPerHour)}/h`,
+              o.baseline ? "baseline" : rate(o.savingPerHour),
               o.baseline
                 ? "—"
                 : o.feasible === false

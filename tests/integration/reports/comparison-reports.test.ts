@@ -213,8 +213,14 @@ describe("a report from a stored comparison", () => {
     // poppler's pdftotext: an independent reader of what was written.
     const text = execFileSync("pdftotext", [file, "-"]).toString().replace(/\s+/g, " ");
     expect(text).toContain(customerName);
+    // Costs per hour under 10 carry a third decimal, so options a fraction of a penny apart differ.
     const gbp = (v: number) =>
-      new Intl.NumberFormat("en-GB", { style: "currency", currency: "GBP" }).format(v);
+      new Intl.NumberFormat("en-GB", {
+        style: "currency",
+        currency: "GBP",
+        minimumFractionDigits: v < 10 ? 3 : 2,
+        maximumFractionDigits: v < 10 ? 3 : 2,
+      }).format(v);
     for (const o of v1.content.options as (TOutcome & {
       label: string;
       baseline: boolean;
