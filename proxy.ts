@@ -9,7 +9,7 @@ import { pageCsp } from "@/lib/platform/security-headers.mjs";
 /** Pages a signed-out visitor may open: home, sign-in, invitation, password reset, dev pages. */
 const PUBLIC_PAGE = /^\/(?:$|sign-in(?:\/|$)|invite\/|reset-password(?:\/|$)|dev\/)/;
 
-export const proxy = auth((req) => {
+const guarded = auth((req) => {
   const { pathname } = req.nextUrl;
   if (!req.auth?.user && !PUBLIC_PAGE.test(pathname)) {
     const signIn = req.nextUrl.clone();
@@ -30,6 +30,16 @@ export const proxy = auth((req) => {
   if (pathname !== "/") res.headers.set("X-Robots-Tag", "noindex, nofollow");
   return res;
 });
+
+/**
+ * With a lazily built config (`NextAuth(() => config)`), Auth.js hands the wrapped handler back
+ * as a promise, and a production build refuses a proxy export that is not a function (every
+ * request then answers 500). Await it per request.
+ */
+export async function proxy(...args: Parameters<typeof guarded>) {
+  const handler = (await (guarded as unknown as Promise<typeof guarded>)) as typeof guarded;
+  return handler(...args);
+}
 
 export const config = {
   // Every page; not API routes, Next's assets or files with an extension (public/). A new page
