@@ -148,30 +148,32 @@ function OptionDetail({ o, c, system }: { o: TReportOption; c: TReportContent; s
   const rate = (v: number | null) => formatReportRate(v, c.currency);
   return (
     <View>
-      {/* Keep an option's heading on the page with the start of its tables. */}
-      <Text style={s.h2} minPresenceAhead={120}>
-        {o.label}
-        {o.key === c.recommendedKey && c.options.length > 1 ? " (lowest cost per hour)" : ""}
-      </Text>
-      {o.description ? <Text style={[s.muted, { marginBottom: 4 }]}>{o.description}</Text> : null}
-      <Text style={{ marginBottom: 4 }}>
-        {o.machine.name} · {LAYOUT_NAMES[o.machine.layout] ?? o.machine.layout} · wheelbase{" "}
-        {formatLength(system, o.machine.wheelbase)} · track{" "}
-        {formatLength(system, o.machine.tracks.front)} front,{" "}
-        {formatLength(system, o.machine.tracks.rear)} rear · drive {o.machine.drive}
-      </Text>
-      <Table
-        widths={[12, 24, 16, 16, 16, 16]}
-        head={["Axle", "Tyre", "Axle load", "Tread new", "Replace at", "Price each"]}
-        rows={o.machine.fitment.map((f) => [
-          f.axle === "front" ? "Front" : "Rear",
-          f.designation,
-          formatMass(system, f.load),
-          formatDepth(system, f.treadDepthNew, 0),
-          formatDepth(system, f.treadDepthReplace, 0),
-          money(f.price),
-        ])}
-      />
+      {/* An option's heading, machine and fitment move to the next page together, never apart. */}
+      <View wrap={false}>
+        <Text style={s.h2}>
+          {o.label}
+          {o.key === c.recommendedKey && c.options.length > 1 ? " (lowest cost per hour)" : ""}
+        </Text>
+        {o.description ? <Text style={[s.muted, { marginBottom: 4 }]}>{o.description}</Text> : null}
+        <Text style={{ marginBottom: 4 }}>
+          {o.machine.name} · {LAYOUT_NAMES[o.machine.layout] ?? o.machine.layout} · wheelbase{" "}
+          {formatLength(system, o.machine.wheelbase)} · track{" "}
+          {formatLength(system, o.machine.tracks.front)} front,{" "}
+          {formatLength(system, o.machine.tracks.rear)} rear · drive {o.machine.drive}
+        </Text>
+        <Table
+          widths={[12, 24, 16, 16, 16, 16]}
+          head={["Axle", "Tyre", "Axle load", "Tread new", "Replace at", "Price each"]}
+          rows={o.machine.fitment.map((f) => [
+            f.axle === "front" ? "Front" : "Rear",
+            f.designation,
+            formatMass(system, f.load),
+            formatDepth(system, f.treadDepthNew, 0),
+            formatDepth(system, f.treadDepthReplace, 0),
+            money(f.price),
+          ])}
+        />
+      </View>
       <View style={{ height: 6 }} />
       <Table
         widths={[18, 20, 16, 16, 15, 15]}
