@@ -13,6 +13,7 @@ import {
 import { dealerships, users } from "./tenancy";
 import { customers, estimates, machines } from "./workspace";
 import { invitations } from "./accounts";
+import { optionStudies } from "./options";
 
 /** Raw bytes (a re-encoded logo image). */
 const bytea = customType<{ data: Buffer; driverData: Buffer }>({
@@ -56,7 +57,7 @@ export const reports = pgTable(
     sourceKind: text().notNull().default("estimate"),
     estimateId: uuid().references(() => estimates.id, { onDelete: "set null" }),
     /** The comparison a report was built from (options feature), when sourceKind is "comparison". */
-    comparisonId: uuid(),
+    comparisonId: uuid().references(() => optionStudies.id, { onDelete: "set null" }),
     title: text().notNull(),
     recommendations: text().notNull().default(""),
     customerNote: text().notNull().default(""),
@@ -72,6 +73,7 @@ export const reports = pgTable(
     index("reports_dealership_updated").on(t.dealershipId, t.updatedAt, t.id),
     index("reports_customer").on(t.customerId),
     index("reports_estimate").on(t.estimateId),
+    index("reports_comparison").on(t.comparisonId),
   ],
 );
 

@@ -1,6 +1,7 @@
 /**
  * Options: comparisons of machine variants and parameter sweeps, stored like estimates.
- * Public entry for higher features (reports read comparisons through `readComparison`).
+ * Public entry for higher features (reports read comparisons through `readComparison` and
+ * `readComparisonSource`).
  */
 export type {
   TComparisonDto,
@@ -13,3 +14,4 @@ export type {
 } from "./schemas/study";
 export { ZComparisonCreate, ZSweepCreate, ZStudyListQuery } from "./schemas/study";
 export { readComparison, readSweep } from "./server/read-study";
+export { readComparisonSource } from "./server/read-comparison-source";

@@ -22,6 +22,13 @@ const COEFFICIENTS: Record<string, { topic: string; text: (v: number) => string;
       text: (v) => `${v} of the loaded tread band is rubber in contact (lugged tyre).`,
       source: "Common practice for lugged agricultural tyres (0.2–0.3), no source.",
     },
+    loadWearExponent: {
+      topic: "Load and rolling wear",
+      text: (v) =>
+        `Rolling wear grows with the tyre's load relative to its rated load, to the power ${v}.`,
+      source:
+        "Archard's wear law (worn volume proportional to normal load × sliding distance), with contact-patch sliding taken to grow with deflection; the exponent is a judgement value until calibrated.",
+    },
     longitudinalStiffnessCoefficient: {
       topic: "Longitudinal slip stiffness",
       text: (v) => `${v} per unit slip ratio, per unit wheel load.`,

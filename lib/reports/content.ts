@@ -9,8 +9,11 @@ import { reportAssumptions, type TAssumption } from "@/lib/reports/assumptions";
 import { summariseEngineDutyCycle, type TReportDutyCycleSummary } from "@/lib/reports/duty-cycle";
 import { paybackOf } from "@/lib/reports/payback";
 
-/** Bumped when the frozen content's shape changes; readers keep understanding older shapes. */
-export const REPORT_CONTENT_SCHEMA = 1;
+/**
+ * Bumped when the frozen content's shape changes; readers keep understanding older shapes.
+ * 2: options carry the comparison's reasons, the cautions of what they change and feasibility.
+ */
+export const REPORT_CONTENT_SCHEMA = 2;
 
 export type TFitmentLine = {
   axle: "front" | "rear";
@@ -69,12 +72,18 @@ export type TReportOption = {
   paybackHours: number | null;
   warnings: string[];
   rotation: string[];
+  /** Plain-words reasons from the comparison (schema 2; absent in older versions). */
+  reasons?: string[];
+  /** Cautions for what this option changes: tyres, pressures, loads, track (schema 2). */
+  cautions?: TCaution[];
+  /** False when the option overloads a tyre or adds a turn the machine cannot make (schema 2). */
+  feasible?: boolean;
   /** The engine's result as issued (per-turn detail for the CSV annex and charts). */
   result: TEstimateResult;
 };
 
 export type TReportContent = {
-  schema: typeof REPORT_CONTENT_SCHEMA;
+  schema: 1 | typeof REPORT_CONTENT_SCHEMA;
   kind: "estimate" | "comparison";
   title: string;
   currency: string;
@@ -82,7 +91,7 @@ export type TReportContent = {
   customer: { name: string; contactName: string | null };
   dutyCycle: TReportDutyCycleSummary;
   options: TReportOption[];
-  /** The option with the lowest cost per operating hour. */
+  /** The workable option with the lowest cost per operating hour. */
   recommendedKey: string | null;
   recommendations: string;
   customerNote: string;
@@ -102,6 +111,9 @@ export type TOptionSource = {
   oneOffCost: number;
   machine: TMachineInput;
   result: TEstimateResult;
+  reasons?: string[];
+  cautions?: TCaution[];
+  feasible?: boolean;
 };
 
 function machineOf(spec: TMachineInput): TReportMachine {
@@ -177,10 +189,14 @@ export function buildReportContent(input: {
       paybackHours: isBaseline ? null : paybackOf(o.oneOffCost, saving ?? 0),
       warnings: o.result.warnings.map((w) => w.message),
       rotation: o.result.rotation.map((r) => r.note),
+      reasons: o.reasons ?? [],
+      cautions: o.cautions ?? [],
+      feasible: o.feasible ?? true,
       result: o.result,
     };
   });
-  const finite = options.filter((o) => Number.isFinite(o.costPerHour));
+  // Only a setup the customer could actually run is recommended.
+  const finite = options.filter((o) => o.feasible !== false && Number.isFinite(o.costPerHour));
   const recommended = finite.reduce<TReportOption | null>(
     (best, o) => (!best || o.costPerHour < best.costPerHour ? o : best),
     null,

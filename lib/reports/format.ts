@@ -9,6 +9,15 @@ export function formatReportMoney(value: number | null, currency: string, digits
   }).format(value);
 }
 
+/**
+ * A cost per operating hour ("£0.574/h"): tyre costs per hour are often under one unit of money,
+ * so below 10 a third decimal keeps options that differ by fractions of a penny apart.
+ */
+export function formatReportRate(value: number | null, currency: string): string {
+  if (value === null || !Number.isFinite(value)) return "—";
+  return `${formatReportMoney(value, currency, Math.abs(value) < 10 ? 3 : 2)}/h`;
+}
+
 export function formatHours(value: number | null): string {
   if (value === null || !Number.isFinite(value)) return "—";
   return `${Math.round(value).toLocaleString("en-GB")} h`;

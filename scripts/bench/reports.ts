@@ -1,9 +1,11 @@
 /**
  * Report benchmark: render time of a four-option comparison report as PDF (target < 1.5 s).
- * Comparisons (the options feature) are not on main yet, so the four options are built here:
- * the demo row-crop tractor as fitted and three changes a dealer might price, each run through
- * the real engine, frozen with buildReportContent and rendered by the same code the PDF route
- * uses. Writes the PDF and its pages as PNGs (pdftoppm) to var/bench/ for a look.
+ * The demo row-crop tractor as fitted and three changes a dealer might price go through the
+ * engine's comparison (`compareOptions`, as the options feature stores it), then through the same
+ * conversion issuing uses for a report built from a stored comparison
+ * (`comparisonOptionSources`: every option re-run with per-turn detail, reasons and cautions),
+ * frozen with buildReportContent and rendered by the code the PDF route uses. Writes the PDF and
+ * its pages as PNGs (pdftoppm) to var/bench/ for a look.
  * Run: npm run bench:reports
  */
 import { execFileSync } from "node:child_process";
@@ -11,56 +13,37 @@ import { mkdirSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import { DEMO_MACHINES } from "@/lib/demo/machines";
 import { DEMO_DUTY_CYCLES } from "@/lib/demo/duty-cycles";
-import { estimate, type TMachineInput } from "@/lib/scrub";
-import { buildReportContent, type TOptionSource } from "@/lib/reports";
+import { compareOptions, type TOptionSpec } from "@/lib/scrub";
+import { buildReportContent } from "@/lib/reports";
+import { comparisonOptionSources } from "@/lib/reports/from-comparison";
 import { renderReportPdf } from "@/features/reports/pdf/render-report-pdf";
 
-const base = DEMO_MACHINES.find((d) => d.id === "row-crop-tractor")!.machine;
+const machine = DEMO_MACHINES.find((d) => d.id === "row-crop-tractor")!.machine;
 const cycle = DEMO_DUTY_CYCLES["row-crop-tractor"]!;
-const variants: {
-  key: string;
-  label: string;
-  oneOffCost: number;
-  change: (m: TMachineInput) => TMachineInput;
-}[] = [
-  { key: "current", label: "As fitted today", oneOffCost: 0, change: (m) => m },
+const priced: TOptionSpec[] = [
   {
-    key: "arm-angle",
-    label: "Steering arms re-set to 20°",
+    name: "Steering arms re-set to 20°",
+    changes: [{ kind: "parameter", parameter: "armAngle", value: 20 }],
     oneOffCost: 350,
-    change: (m) => ({
-      ...m,
-      steering: { ...m.steering, armAngle: 20 } as TMachineInput["steering"],
-    }),
   },
   {
-    key: "ideal",
-    label: "Ackermann-corrected linkage",
+    name: "Ackermann-corrected linkage",
+    changes: [{ kind: "steering", steering: { layout: "ideal", maxLock: 52 } }],
     oneOffCost: 1800,
-    change: (m) => ({ ...m, steering: { layout: "ideal", maxLock: 52 } }),
   },
   {
-    key: "narrow-front",
-    label: "Narrower front track (1.8 m)",
+    name: "Narrower front track (1.8 m)",
+    changes: [{ kind: "parameter", parameter: "frontTrack", value: 1.8 }],
     oneOffCost: 600,
-    change: (m) => ({
-      ...m,
-      axles: { ...m.axles, front: { ...m.axles.front, track: 1.8, pivotTrack: 1.6 } },
-    }),
   },
 ];
-
-const options: TOptionSource[] = variants.map((v, i) => {
-  const machine = v.change(structuredClone(base) as TMachineInput);
-  return {
-    key: v.key,
-    label: v.label,
-    baseline: i === 0,
-    estimateId: null,
-    oneOffCost: v.oneOffCost,
-    machine,
-    result: estimate(machine, cycle),
-  };
+// Stored as JSON, as option_studies keeps it.
+const result = JSON.parse(JSON.stringify(compareOptions(machine, cycle, priced, { hours: 2000 })));
+const options = comparisonOptionSources({
+  machine,
+  dutyCycle: cycle,
+  result,
+  baselineDescription: `${machine.name} on ${cycle.name}, as fitted today`,
 });
 const content = buildReportContent({
   kind: "comparison",

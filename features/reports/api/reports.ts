@@ -105,7 +105,7 @@ function useReportMutation<TIn, TOut>(
 export function useCreateReport() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: { estimateId: string; title?: string }) =>
+    mutationFn: (input: ({ estimateId: string } | { comparisonId: string }) & { title?: string }) =>
       apiFetch<TReportDto>("/api/v1/reports", { method: "POST", body: input }),
     onSuccess: () => qc.invalidateQueries({ queryKey: reportKeys.lists() }),
   });

@@ -4,8 +4,12 @@ import { useRouter } from "next/navigation";
 import { Button } from "@/lib/ui/button";
 import { useCreateReport } from "@/features/reports/api/reports";
 
-/** Starts a draft quote report from an estimate and opens it. */
-export function CreateReportButton({ estimateId }: { estimateId: string }) {
+/** Starts a draft quote report from an estimate or a stored comparison and opens it. */
+export function CreateReportButton(props: { estimateId: string } | { comparisonId: string }) {
+  const source =
+    "comparisonId" in props
+      ? { comparisonId: props.comparisonId }
+      : { estimateId: props.estimateId };
   const create = useCreateReport();
   const router = useRouter();
   return (
@@ -13,9 +17,7 @@ export function CreateReportButton({ estimateId }: { estimateId: string }) {
       <Button
         size="sm"
         busy={create.isPending}
-        onClick={() =>
-          create.mutate({ estimateId }, { onSuccess: (r) => router.push(`/reports/${r.id}`) })
-        }
+        onClick={() => create.mutate(source, { onSuccess: (r) => router.push(`/reports/${r.id}`) })}
       >
         Prepare a quote report
       </Button>

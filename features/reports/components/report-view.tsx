@@ -11,6 +11,7 @@ import {
   formatLength,
   formatMass,
   formatReportMoney,
+  formatReportRate,
   formatSpeed,
   LAYOUT_NAMES,
   POSITION_NAMES,
@@ -49,6 +50,7 @@ export function ReportView({
   const v = query.data;
   const c = v.content;
   const money = (x: number | null) => formatReportMoney(x, c.currency);
+  const rate = (x: number | null) => formatReportRate(x, c.currency);
   const option: TReportOption =
     c.options.find((o) => o.key === (picked ?? c.recommendedKey)) ?? c.options[0]!;
   const base = `/api/v1/reports/${reportId}/versions/${v.version}`;
@@ -115,7 +117,7 @@ export function ReportView({
             value: o.costPerHour,
             highlight: o.key === c.recommendedKey,
           }))}
-          format={(x) => `${money(x)}/h`}
+          format={(x) => rate(x)}
         />
       </Card>
 
@@ -158,7 +160,7 @@ export function ReportView({
           <div className="rounded-md bg-ink-50 p-3">
             <dt className="text-xs text-ink-600">Tyre cost per operating hour</dt>
             <dd className="text-xl font-bold" data-testid="option-cost">
-              {money(option.costPerHour)}/h
+              {rate(option.costPerHour)}
             </dd>
           </div>
           <div className="rounded-md bg-ink-50 p-3">
@@ -169,15 +171,32 @@ export function ReportView({
           </div>
           <div className="rounded-md bg-ink-50 p-3">
             <dt className="text-xs text-ink-600">Payback</dt>
-            <dd className="text-xl font-bold">
+            <dd className="text-xl font-bold" data-testid="option-payback">
               {option.baseline
                 ? "Baseline"
-                : option.paybackHours === null
-                  ? "Does not pay back"
-                  : formatHours(option.paybackHours)}
+                : option.feasible === false
+                  ? "Not workable"
+                  : option.paybackHours === null
+                    ? "Does not pay back"
+                    : formatHours(option.paybackHours)}
             </dd>
           </div>
         </dl>
+        {option.feasible === false ? (
+          <div className="mb-3">
+            <Caution
+              tone="danger"
+              title="Not workable as priced: it overloads a tyre or adds a turn the machine cannot make at this duty cycle."
+            />
+          </div>
+        ) : null}
+        {option.reasons?.length ? (
+          <ul className="mb-3 list-disc pl-5 text-sm text-ink-800" aria-label="Why it differs">
+            {option.reasons.map((r, i) => (
+              <li key={i}>{r}</li>
+            ))}
+          </ul>
+        ) : null}
         <div className="overflow-x-auto">
           <table className="min-w-full divide-y divide-ink-200 text-sm">
             <caption className="sr-only">Tyre life and cost by position</caption>
@@ -218,7 +237,7 @@ export function ReportView({
                   </td>
                   <td className="px-3 py-2 text-right">{formatHours(p.hoursToReplacement)}</td>
                   <td className="px-3 py-2 text-right">{money(p.replacementCost)}</td>
-                  <td className="px-3 py-2 text-right">{money(p.costPerHour)}/h</td>
+                  <td className="px-3 py-2 text-right">{rate(p.costPerHour)}</td>
                 </tr>
               ))}
             </tbody>
@@ -234,6 +253,11 @@ export function ReportView({
         {option.warnings.map((w, i) => (
           <div key={i} className="mt-2">
             <Caution title={w} />
+          </div>
+        ))}
+        {option.cautions?.map((x) => (
+          <div key={x.code} className="mt-2">
+            <Caution title="Before making this change">{x.text}</Caution>
           </div>
         ))}
       </Card>

@@ -68,6 +68,7 @@ function Workbench({ r }: { r: TReportDto }) {
               </Link>
             </>
           ) : null}
+          {r.sourceKind === "comparison" ? " · built from a stored comparison of options" : null}
         </span>
       </div>
 
@@ -115,8 +116,9 @@ function Workbench({ r }: { r: TReportDto }) {
             </Caution>
           ) : null}
           <p className="text-xs text-ink-600">
-            Issuing freezes the machine, fitment, duty cycle, figures and this text into a version
-            that never changes; later edits need a new version.
+            Issuing freezes the machine, fitment, duty cycle, figures
+            {r.sourceKind === "comparison" ? " of every option with its payback" : ""} and this text
+            into a version that never changes; later edits need a new version.
           </p>
         </form>
       </Card>

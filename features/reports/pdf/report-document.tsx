@@ -16,6 +16,7 @@ import {
   formatLength,
   formatMass,
   formatReportMoney,
+  formatReportRate,
   formatSpeed,
   LAYOUT_NAMES,
   POSITION_NAMES,
@@ -144,31 +145,35 @@ function BarsChart({
 
 function OptionDetail({ o, c, system }: { o: TReportOption; c: TReportContent; system: TSystem }) {
   const money = (v: number | null) => formatReportMoney(v, c.currency);
+  const rate = (v: number | null) => formatReportRate(v, c.currency);
   return (
     <View>
-      <Text style={s.h2}>
-        {o.label}
-        {o.key === c.recommendedKey && c.options.length > 1 ? " (lowest cost per hour)" : ""}
-      </Text>
-      {o.description ? <Text style={[s.muted, { marginBottom: 4 }]}>{o.description}</Text> : null}
-      <Text style={{ marginBottom: 4 }}>
-        {o.machine.name} · {LAYOUT_NAMES[o.machine.layout] ?? o.machine.layout} · wheelbase{" "}
-        {formatLength(system, o.machine.wheelbase)} · track{" "}
-        {formatLength(system, o.machine.tracks.front)} front,{" "}
-        {formatLength(system, o.machine.tracks.rear)} rear · drive {o.machine.drive}
-      </Text>
-      <Table
-        widths={[12, 24, 16, 16, 16, 16]}
-        head={["Axle", "Tyre", "Axle load", "Tread new", "Replace at", "Price each"]}
-        rows={o.machine.fitment.map((f) => [
-          f.axle === "front" ? "Front" : "Rear",
-          f.designation,
-          formatMass(system, f.load),
-          formatDepth(system, f.treadDepthNew, 0),
-          formatDepth(system, f.treadDepthReplace, 0),
-          money(f.price),
-        ])}
-      />
+      {/* An option's heading, machine and fitment move to the next page together, never apart. */}
+      <View wrap={false}>
+        <Text style={s.h2}>
+          {o.label}
+          {o.key === c.recommendedKey && c.options.length > 1 ? " (lowest cost per hour)" : ""}
+        </Text>
+        {o.description ? <Text style={[s.muted, { marginBottom: 4 }]}>{o.description}</Text> : null}
+        <Text style={{ marginBottom: 4 }}>
+          {o.machine.name} · {LAYOUT_NAMES[o.machine.layout] ?? o.machine.layout} · wheelbase{" "}
+          {formatLength(system, o.machine.wheelbase)} · track{" "}
+          {formatLength(system, o.machine.tracks.front)} front,{" "}
+          {formatLength(system, o.machine.tracks.rear)} rear · drive {o.machine.drive}
+        </Text>
+        <Table
+          widths={[12, 24, 16, 16, 16, 16]}
+          head={["Axle", "Tyre", "Axle load", "Tread new", "Replace at", "Price each"]}
+          rows={o.machine.fitment.map((f) => [
+            f.axle === "front" ? "Front" : "Rear",
+            f.designation,
+            formatMass(system, f.load),
+            formatDepth(system, f.treadDepthNew, 0),
+            formatDepth(system, f.treadDepthReplace, 0),
+            money(f.price),
+          ])}
+        />
+      </View>
       <View style={{ height: 6 }} />
       <Table
         widths={[18, 20, 16, 16, 15, 15]}
@@ -179,20 +184,36 @@ function OptionDetail({ o, c, system }: { o: TReportOption; c: TReportContent; s
           formatDepth(system, p.wearPer100h.total),
           formatHours(p.hoursToReplacement),
           money(p.replacementCost),
-          `${money(p.costPerHour)}/h`,
+          rate(p.costPerHour),
         ])}
       />
       <Text style={{ marginTop: 4, fontWeight: 700 }}>
-        Tyre cost per operating hour: {money(o.costPerHour)}/h
+        Tyre cost per operating hour: {rate(o.costPerHour)}
         {o.baseline
           ? ""
-          : ` · one-off cost ${money(o.oneOffCost)} · saving ${money(o.savingPerHour)}/h · payback ${
+          : ` · one-off cost ${money(o.oneOffCost)} · saving ${rate(o.savingPerHour)} · payback ${
               o.paybackHours === null ? "never at this duty cycle" : formatHours(o.paybackHours)
             }`}
       </Text>
+      {o.feasible === false ? (
+        <Text style={[s.caution, { marginTop: 3, fontWeight: 700 }]}>
+          Not workable as priced: it overloads a tyre or adds a turn the machine cannot make at this
+          duty cycle.
+        </Text>
+      ) : null}
+      {o.reasons?.map((r, i) => (
+        <Text key={i} style={{ marginTop: 2 }}>
+          • {r}
+        </Text>
+      ))}
       {o.warnings.map((w, i) => (
         <Text key={i} style={[s.caution, { marginTop: 3 }]}>
           {w}
+        </Text>
+      ))}
+      {o.cautions?.map((x) => (
+        <Text key={x.code} style={[s.caution, { marginTop: 3 }]}>
+          Before making this change: {x.text}
         </Text>
       ))}
       {o.rotation.map((r, i) => (
@@ -221,6 +242,7 @@ export function ReportDocument({
   system: TSystem;
 }) {
   const money = (v: number | null) => formatReportMoney(v, c.currency);
+  const rate = (v: number | null) => formatReportRate(v, c.currency);
   const ref = `Report ${reportId.slice(0, 8).toUpperCase()} · version ${version}`;
   const turnRows = c.options[0]!.result.turns.slice(0, 40);
   const dc = c.dutyCycle;
@@ -266,7 +288,7 @@ export function ReportDocument({
             value: o.costPerHour,
             highlight: o.key === c.recommendedKey,
           }))}
-          format={(v) => `${money(v)}/h`}
+          format={(v) => rate(v)}
         />
         {c.options.length > 1 ? (
           <Table
@@ -274,10 +296,16 @@ export function ReportDocument({
             head={["Option", "Cost per hour", "One-off cost", "Saving per hour", "Payback"]}
             rows={c.options.map((o) => [
               o.label,
-              `${money(o.costPerHour)}/h`,
+              rate(o.costPerHour),
               o.baseline ? "—" : money(o.oneOffCost),
-              o.baseline ? "baseline" : `${money(o.savingPerHour)}/h`,
-              o.baseline ? "—" : o.paybackHours === null ? "never" : formatHours(o.paybackHours),
+              o.baseline ? "baseline" : rate(o.savingPerHour),
+              o.baseline
+                ? "—"
+                : o.feasible === false
+                  ? "not workable"
+                  : o.paybackHours === null
+                    ? "never"
+                    : formatHours(o.paybackHours),
             ])}
           />
         ) : null}

@@ -2,10 +2,28 @@ import { z } from "zod";
 import type { TReportContent, TReportStatus } from "@/lib/reports";
 import { REPORT_STATUSES } from "@/lib/reports";
 
-export const ZReportCreate = z.object({
-  estimateId: z.uuid("estimateId must be the id of one of your estimates."),
-  title: z.string().trim().max(160, "Title must be at most 160 characters.").optional(),
-});
+/** Body of POST /api/v1/reports: a draft from one estimate or from one stored comparison. */
+export const ZReportCreate = z
+  .object({
+    estimateId: z.uuid("estimateId must be the id of one of your estimates.").optional(),
+    comparisonId: z.uuid("comparisonId must be the id of one of your comparisons.").optional(),
+    title: z.string().trim().max(160, "Title must be at most 160 characters.").optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.estimateId && v.comparisonId)
+      ctx.addIssue({
+        code: "custom",
+        path: ["comparisonId"],
+        message: "Give either estimateId or comparisonId, not both: a report has one source.",
+      });
+    if (!v.estimateId && !v.comparisonId)
+      for (const field of ["estimateId", "comparisonId"])
+        ctx.addIssue({
+          code: "custom",
+          path: [field],
+          message: "Give the estimateId or the comparisonId the report is built from.",
+        });
+  });
 export type TReportCreate = z.input<typeof ZReportCreate>;
 
 /** What may change on a report before (re-)issuing; issued versions never change. */
@@ -114,8 +132,10 @@ export type TReportDto = {
   customerId: string;
   customerName: string;
   machineName: string;
-  sourceKind: string;
+  sourceKind: "estimate" | "comparison";
   estimateId: string | null;
+  /** The stored comparison a report was built from (staff only). */
+  comparisonId: string | null;
   recommendations: string;
   customerNote: string;
   latestVersion: number;

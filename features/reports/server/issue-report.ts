@@ -1,11 +1,13 @@
 import "server-only";
 import { and, eq, isNull } from "drizzle-orm";
-import type { Db } from "@/db/client";
-import { customers, estimates, reports, reportVersions, users } from "@/db/schema";
+import type { Db, DbOrTx } from "@/db/client";
+import { customers, estimates, reports, reportVersions, users, type TReport } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
-import { buildReportContent } from "@/lib/reports";
+import { buildReportContent, type TOptionSource } from "@/lib/reports";
+import { comparisonOptionSources, ComparisonOutdatedError } from "@/lib/reports/from-comparison";
 import type { TDutyCycleInput, TEstimateResult, TMachineInput } from "@/lib/scrub";
 import { consumeReportAllowance, ReportAllowanceError } from "@/features/billing";
+import { readComparisonSource } from "@/features/options";
 import type { TReportVersionDto } from "@/features/reports/schemas/report";
 import { assertMayPrepareReports, loadReport } from "@/features/reports/server/report-access";
 import { loadBranding } from "@/features/reports/server/get-branding";
@@ -13,9 +15,15 @@ import { toVersionDto } from "@/features/reports/server/version-dto";
 import { ApiError } from "@/features/platform";
 
 type TEstimateInputs = { machine: TMachineInput; dutyCycle: TDutyCycleInput };
+type TSource = {
+  kind: "estimate" | "comparison";
+  dutyCycle: TDutyCycleInput;
+  options: TOptionSource[];
+};
 
 /**
- * Issues the next version of a report: freezes the estimate's inputs and result, the customer,
+ * Issues the next version of a report: freezes the source's inputs and results (one estimate, or
+ * every option of a comparison with its payback, reasons and cautions), the customer,
  * the branding and the draft text into an immutable row, marks the previous version superseded
  * and consumes one report from the dealership's allowance, all in one transaction (a refused
  * allowance leaves nothing issued).
@@ -34,49 +42,31 @@ export async function issueReport({
     return await db.transaction(async (tx) => {
       // The row lock serialises two issues of the same report: versions stay 1, 2, 3...
       const report = await loadReport(tx, actor, id, "write", { lock: true });
-      if (!report.estimateId)
-        throw new ApiError(
-          409,
-          "source_missing",
-          "The estimate this report was built from has been deleted: start a new report from a current estimate.",
-        );
-      const [source] = await tx
-        .select({ estimate: estimates, customer: customers })
-        .from(estimates)
-        .innerJoin(customers, eq(customers.id, report.customerId))
+      const source = await loadSource(tx, actor, report);
+      const [customer] = await tx
+        .select({ name: customers.name, contactName: customers.contactName })
+        .from(customers)
         .where(
-          and(eq(estimates.id, report.estimateId), eq(estimates.dealershipId, actor.dealershipId)),
+          and(eq(customers.id, report.customerId), eq(customers.dealershipId, actor.dealershipId)),
         );
-      if (!source) throw new ApiError(409, "source_missing", "The report's estimate is gone.");
+      if (!customer) throw new ApiError(409, "source_missing", "The report's customer is gone.");
       const { dealershipName, branding } = await loadBranding(tx, actor.dealershipId);
       const [issuer] = await tx
         .select({ name: users.name })
         .from(users)
         .where(eq(users.id, actor.userId));
-      const inputs = source.estimate.inputs as TEstimateInputs;
       const issuedAt = new Date();
       const content = buildReportContent({
-        kind: "estimate",
+        kind: source.kind,
         title: report.title,
         currency: branding?.currency ?? "EUR",
         dealership: {
           name: branding?.displayName || dealershipName,
           contactLine: branding?.contactLine ?? "",
         },
-        customer: { name: source.customer.name, contactName: source.customer.contactName },
-        dutyCycle: inputs.dutyCycle,
-        options: [
-          {
-            key: "current",
-            label: "As fitted today",
-            description: `${source.estimate.machineName} on ${source.estimate.dutyCycleName}`,
-            baseline: true,
-            estimateId: source.estimate.id,
-            oneOffCost: 0,
-            machine: inputs.machine,
-            result: source.estimate.result as TEstimateResult,
-          },
-        ],
+        customer: { name: customer.name, contactName: customer.contactName },
+        dutyCycle: source.dutyCycle,
+        options: source.options,
         recommendations: report.recommendations,
         customerNote: report.customerNote,
         issuedAt,
@@ -105,7 +95,7 @@ export async function issueReport({
         .returning();
       await tx
         .update(reports)
-        .set({ latestVersion: version, customerName: source.customer.name, updatedAt: issuedAt })
+        .set({ latestVersion: version, customerName: customer.name, updatedAt: issuedAt })
         .where(eq(reports.id, report.id));
       return toVersionDto(row!, version);
     });
@@ -114,4 +104,67 @@ export async function issueReport({
       throw new ApiError(402, e.code, e.message, undefined, { billingHref: e.billingHref });
     throw e;
   }
+}
+
+const sourceMissing = (what: string) =>
+  new ApiError(
+    409,
+    "source_missing",
+    `The ${what} this report was built from has been deleted: start a new report from a current ${what}.`,
+  );
+
+/** What the report is built from, as option sources: one estimate or a stored comparison. */
+async function loadSource(tx: DbOrTx, actor: TActor, report: TReport): Promise<TSource> {
+  if (report.sourceKind === "comparison") {
+    if (!report.comparisonId) throw sourceMissing("comparison");
+    let found;
+    try {
+      found = await readComparisonSource({ db: tx, actor, id: report.comparisonId });
+    } catch (e) {
+      if (e instanceof ApiError && e.status === 404) throw sourceMissing("comparison");
+      throw e;
+    }
+    const { comparison, machine, dutyCycle } = found;
+    try {
+      return {
+        kind: "comparison",
+        dutyCycle,
+        options: comparisonOptionSources({
+          machine,
+          dutyCycle,
+          result: comparison.result,
+          baselineDescription: `${comparison.machineName} on ${dutyCycle.name}, as fitted today`,
+        }),
+      };
+    } catch (e) {
+      if (e instanceof ComparisonOutdatedError)
+        throw new ApiError(409, "comparison_outdated", e.message);
+      throw e;
+    }
+  }
+  if (!report.estimateId) throw sourceMissing("estimate");
+  const [estimate] = await tx
+    .select()
+    .from(estimates)
+    .where(
+      and(eq(estimates.id, report.estimateId), eq(estimates.dealershipId, actor.dealershipId)),
+    );
+  if (!estimate) throw sourceMissing("estimate");
+  const inputs = estimate.inputs as TEstimateInputs;
+  return {
+    kind: "estimate",
+    dutyCycle: inputs.dutyCycle,
+    options: [
+      {
+        key: "current",
+        label: "As fitted today",
+        description: `${estimate.machineName} on ${estimate.dutyCycleName}`,
+        baseline: true,
+        estimateId: estimate.id,
+        oneOffCost: 0,
+        machine: inputs.machine,
+        result: estimate.result as TEstimateResult,
+      },
+    ],
+  };
 }

@@ -345,9 +345,14 @@ describe("PDF and CSV annex", () => {
     const text = execFileSync("pdftotext", ["-layout", file, "-"]).toString();
     const info = execFileSync("pdfinfo", [file]).toString();
     expect(text).toContain(customerName);
-    const cost = new Intl.NumberFormat("en-GB", { style: "currency", currency: "GBP" }).format(
-      v1.content.options[0].costPerHour,
-    );
+    // Costs per hour under 10 carry a third decimal (Intl.NumberFormat, ECMA-402).
+    const perHour = v1.content.options[0].costPerHour;
+    const cost = new Intl.NumberFormat("en-GB", {
+      style: "currency",
+      currency: "GBP",
+      minimumFractionDigits: perHour < 10 ? 3 : 2,
+      maximumFractionDigits: perHour < 10 ? 3 : 2,
+    }).format(perHour);
     expect(text).toContain(cost);
     expect(text).toContain("not warranty");
     expect(text).toMatch(/explosive separation/);

@@ -5,6 +5,7 @@ import { estimate, type TMachineInput } from "@/lib/scrub";
 import {
   buildReportContent,
   formatReportMoney,
+  formatReportRate,
   paybackOf,
   reportFileName,
   reportStatus,
@@ -119,5 +120,14 @@ describe("buildReportContent", () => {
   it("prices each position's replacement from its axle's tyre", () => {
     const front = content.options[0]!.positions.find((p) => p.position === "front-left")!;
     expect(front.replacementCost).toBe(base.axles.front.tyre.price);
+  });
+});
+
+describe("formatReportRate", () => {
+  it("keeps a third decimal below 10 per hour, so close options stay apart (ECMA-402 rounding)", () => {
+    expect(formatReportRate(0.5741, "GBP")).toBe("£0.574/h");
+    expect(formatReportRate(0.5665, "GBP")).toBe("£0.567/h");
+    expect(formatReportRate(12.345, "EUR")).toBe("€12.35/h");
+    expect(formatReportRate(Infinity, "GBP")).toBe("—");
   });
 });

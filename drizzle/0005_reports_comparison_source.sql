@@ -1,0 +1,2 @@
+ALTER TABLE "reports" ADD CONSTRAINT "reports_comparison_id_option_studies_id_fk" FOREIGN KEY ("comparison_id") REFERENCES "public"."option_studies"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
+CREATE INDEX "reports_comparison" ON "reports" USING btree ("comparison_id");

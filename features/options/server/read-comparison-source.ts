@@ -1,0 +1,22 @@
+import "server-only";
+import type { DbOrTx } from "@/db/client";
+import type { TActor } from "@/lib/authz/actor";
+import type { TDutyCycleInput, TMachineInput } from "@/lib/scrub";
+import type { TComparisonDto } from "../schemas/study";
+import { getStudy } from "./get-study";
+import type { TStudyInputs } from "./run-study";
+import { toComparisonDto } from "./study-dto";
+
+/**
+ * A stored comparison the actor may read with the machine and duty cycle it froze (404
+ * otherwise): what a quote report needs to rebuild every option's full result.
+ */
+export async function readComparisonSource(o: {
+  db: DbOrTx;
+  actor: TActor;
+  id: string;
+}): Promise<{ comparison: TComparisonDto; machine: TMachineInput; dutyCycle: TDutyCycleInput }> {
+  const row = await getStudy({ ...o, kind: "comparison" });
+  const inputs = row.inputs as Extract<TStudyInputs, { kind: "comparison" }>;
+  return { comparison: toComparisonDto(row), machine: inputs.machine, dutyCycle: inputs.dutyCycle };
+}
