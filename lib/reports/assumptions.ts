@@ -1,4 +1,5 @@
 import type { TDutyCycleInput, TEstimateResult } from "@/lib/scrub";
+import { calibrationAssumption, type TReportCalibration } from "@/lib/reports/calibration-note";
 
 /** One assumption behind a report's figures and where it comes from. */
 export type TAssumption = { topic: string; text: string; source: string };
@@ -38,7 +39,11 @@ const COEFFICIENTS: Record<string, { topic: string; text: (v: number) => string;
   };
 
 /** The assumptions listed in every report: model, coefficients as run, and the duty cycle. */
-export function reportAssumptions(result: TEstimateResult, cycle: TDutyCycleInput): TAssumption[] {
+export function reportAssumptions(
+  result: TEstimateResult,
+  cycle: TDutyCycleInput,
+  calibration: TReportCalibration | null = null,
+): TAssumption[] {
   const out: TAssumption[] = [
     {
       topic: "Steering geometry",
@@ -65,13 +70,7 @@ export function reportAssumptions(result: TEstimateResult, cycle: TDutyCycleInpu
     );
   }
   const calibrated = result.positions.some((p) => p.wearCoefficient.calibrated);
-  out.push({
-    topic: "Calibration",
-    text: calibrated
-      ? "Wear coefficients were calibrated from tread depths measured on this machine."
-      : "Wear coefficients are uncalibrated defaults: measured tread depths at service visits will sharpen these figures.",
-    source: calibrated ? "Tread readings recorded by the dealership." : "Engine defaults.",
-  });
+  out.push(calibrationAssumption(calibration, calibrated));
   out.push({
     topic: "Duty cycle",
     text: `One operating hour as described by the duty cycle "${cycle.name}": ${cycle.turns.length} kinds of turn and ${Math.round(cycle.straight.distancePerHour)} m of straight travel.`,

@@ -6,6 +6,7 @@ import type {
   TPosition,
 } from "@/lib/scrub";
 import { reportAssumptions, type TAssumption } from "@/lib/reports/assumptions";
+import type { TReportCalibration } from "@/lib/reports/calibration-note";
 import { summariseEngineDutyCycle, type TReportDutyCycleSummary } from "@/lib/reports/duty-cycle";
 import { paybackOf } from "@/lib/reports/payback";
 
@@ -139,7 +140,11 @@ function machineOf(spec: TMachineInput): TReportMachine {
   };
 }
 
-function positionsOf(spec: TMachineInput, result: TEstimateResult): TReportPosition[] {
+function positionsOf(
+  spec: TMachineInput,
+  result: TEstimateResult,
+  calibrated: boolean,
+): TReportPosition[] {
   return result.positions.map((p) => ({
     position: p.position,
     designation: p.designation,
@@ -147,7 +152,7 @@ function positionsOf(spec: TMachineInput, result: TEstimateResult): TReportPosit
     replacementCost: spec.axles[p.position.startsWith("front") ? "front" : "rear"].tyre.price,
     costPerHour: p.costPerHour,
     wearPer100h: p.wearPer100h,
-    calibrated: p.wearCoefficient.calibrated,
+    calibrated: calibrated || p.wearCoefficient.calibrated,
     wearsFirst: p.wearsFirst,
   }));
 }
@@ -169,6 +174,8 @@ export function buildReportContent(input: {
   customerNote: string;
   issuedAt: Date;
   issuedBy: string;
+  /** The calibration the figures ran with (a calibrated estimate or its comparison), if any. */
+  calibration?: TReportCalibration | null;
 }): TReportContent {
   if (input.options.length === 0) throw new Error("A report needs at least one option.");
   const baseline = input.options.find((o) => o.baseline) ?? input.options[0]!;
@@ -184,7 +191,7 @@ export function buildReportContent(input: {
       estimateId: o.estimateId,
       oneOffCost: isBaseline ? 0 : o.oneOffCost,
       costPerHour: o.result.costPerHour,
-      positions: positionsOf(o.machine, o.result),
+      positions: positionsOf(o.machine, o.result, Boolean(input.calibration)),
       savingPerHour: saving,
       paybackHours: isBaseline ? null : paybackOf(o.oneOffCost, saving ?? 0),
       warnings: o.result.warnings.map((w) => w.message),
@@ -214,7 +221,7 @@ export function buildReportContent(input: {
     recommendedKey: recommended?.key ?? null,
     recommendations: input.recommendations,
     customerNote: input.customerNote,
-    assumptions: reportAssumptions(first.result, input.dutyCycle),
+    assumptions: reportAssumptions(first.result, input.dutyCycle, input.calibration ?? null),
     cautions: [...first.result.cautions],
     engineVersion: first.result.engineVersion,
     issuedAt: input.issuedAt.toISOString(),

@@ -4,6 +4,7 @@ import {
   estimate,
   type TComparisonResult,
   type TDutyCycleInput,
+  type TEstimateOptions,
   type TMachineInput,
 } from "@/lib/scrub";
 import type { TOptionSource } from "@/lib/reports/content";
@@ -37,6 +38,8 @@ export function comparisonOptionSources(input: {
   machine: TMachineInput;
   dutyCycle: TDutyCycleInput;
   result: TComparisonResult;
+  /** The engine options the comparison ran with (a calibrated estimate's scaled coefficients). */
+  engineOptions?: TEstimateOptions;
   /** What the machine is run on today, for the baseline's description. */
   baselineDescription: string;
 }): TOptionSource[] {
@@ -45,7 +48,7 @@ export function comparisonOptionSources(input: {
     throw new ComparisonOutdatedError(
       `This comparison was run with engine ${result.engineVersion}; the engine is now ${ENGINE_VERSION}. Rerun the comparison, then prepare the report from its new version.`,
     );
-  const current = estimate(machine, dutyCycle);
+  const current = estimate(machine, dutyCycle, input.engineOptions);
   assertSame("As fitted today", result.current.costPerHour, current.costPerHour);
   const baseline: TOptionSource = {
     key: "current",
@@ -62,7 +65,7 @@ export function comparisonOptionSources(input: {
   };
   const options = result.options.map((o, i): TOptionSource => {
     const variant = applyChanges(machine, dutyCycle, o.changes);
-    const run = estimate(variant.machine, variant.dutyCycle);
+    const run = estimate(variant.machine, variant.dutyCycle, input.engineOptions);
     assertSame(o.name, o.costPerHour, run.costPerHour);
     return {
       key: `option-${i + 1}`,

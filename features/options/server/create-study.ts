@@ -8,6 +8,7 @@ import { ZComparisonCreate, ZSweepCreate, type TStudyKind } from "../schemas/stu
 import { can } from "@/lib/authz/policy";
 import { assertMayRun } from "./access";
 import { ApiError, parseOrThrow } from "@/features/platform";
+import type { TReportCalibration } from "@/lib/reports/calibration-note";
 import { runStudy, type TStudyInputs } from "./run-study";
 
 /**
@@ -44,11 +45,13 @@ export async function createStudy({
     machine: TMachineInput;
     dutyCycle: TDutyCycleInput;
     options?: TEstimateOptions;
+    calibration?: TReportCalibration | null;
   };
   const engine = {
     machine: frozen.machine,
     dutyCycle: frozen.dutyCycle,
     engineOptions: frozen.options ?? {},
+    calibration: frozen.calibration ?? null,
   };
   const inputs: TStudyInputs =
     "options" in body

@@ -10,6 +10,7 @@ import {
   type TSweepSpec,
 } from "@/lib/scrub";
 import { ApiError } from "@/features/platform";
+import type { TReportCalibration } from "@/lib/reports/calibration-note";
 
 /**
  * What a study freezes: the estimate's engine inputs (with its engine options, so a study of a
@@ -19,6 +20,8 @@ type TFrozenEngineInputs = {
   machine: TMachineInput;
   dutyCycle: TDutyCycleInput;
   engineOptions?: TEstimateOptions;
+  /** The source estimate's calibration record, when it was a calibrated estimate. */
+  calibration?: TReportCalibration | null;
 };
 export type TStudyInputs =
   | (TFrozenEngineInputs & { kind: "comparison"; options: TOptionSpec[]; hours: number })

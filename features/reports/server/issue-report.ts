@@ -5,6 +5,7 @@ import { customers, estimates, reports, reportVersions, users, type TReport } fr
 import type { TActor } from "@/lib/authz/actor";
 import { buildReportContent, type TOptionSource } from "@/lib/reports";
 import { comparisonOptionSources, ComparisonOutdatedError } from "@/lib/reports/from-comparison";
+import type { TReportCalibration } from "@/lib/reports/calibration-note";
 import type { TDutyCycleInput, TEstimateResult, TMachineInput } from "@/lib/scrub";
 import { consumeReportAllowance, ReportAllowanceError } from "@/features/billing";
 import { readComparisonSource } from "@/features/options";
@@ -14,11 +15,16 @@ import { loadBranding } from "@/features/reports/server/get-branding";
 import { toVersionDto } from "@/features/reports/server/version-dto";
 import { ApiError } from "@/features/platform";
 
-type TEstimateInputs = { machine: TMachineInput; dutyCycle: TDutyCycleInput };
+type TEstimateInputs = {
+  machine: TMachineInput;
+  dutyCycle: TDutyCycleInput;
+  calibration?: TReportCalibration | null;
+};
 type TSource = {
   kind: "estimate" | "comparison";
   dutyCycle: TDutyCycleInput;
   options: TOptionSource[];
+  calibration: TReportCalibration | null;
 };
 
 /**
@@ -71,6 +77,7 @@ export async function issueReport({
         customerNote: report.customerNote,
         issuedAt,
         issuedBy: issuer?.name ?? actor.email,
+        calibration: source.calibration,
       });
       const version = report.latestVersion + 1;
       await consumeReportAllowance(tx, { dealershipId: actor.dealershipId, reportId: report.id });
@@ -124,14 +131,16 @@ async function loadSource(tx: DbOrTx, actor: TActor, report: TReport): Promise<T
       if (e instanceof ApiError && e.status === 404) throw sourceMissing("comparison");
       throw e;
     }
-    const { comparison, machine, dutyCycle } = found;
+    const { comparison, machine, dutyCycle, engineOptions, calibration } = found;
     try {
       return {
         kind: "comparison",
         dutyCycle,
+        calibration,
         options: comparisonOptionSources({
           machine,
           dutyCycle,
+          engineOptions,
           result: comparison.result,
           baselineDescription: `${comparison.machineName} on ${dutyCycle.name}, as fitted today`,
         }),
@@ -154,6 +163,7 @@ async function loadSource(tx: DbOrTx, actor: TActor, report: TReport): Promise<T
   return {
     kind: "estimate",
     dutyCycle: inputs.dutyCycle,
+    calibration: inputs.calibration ?? null,
     options: [
       {
         key: "current",

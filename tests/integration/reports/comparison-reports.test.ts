@@ -151,6 +151,66 @@ describe("a report from a stored comparison", () => {
     expect(read.body.comparisonId).toBe(comparisonId);
   });
 
+  it("a comparison of a calibrated estimate issues with the calibration's figures and says so", async () => {
+    const { estimates } = await import("@/db/schema");
+    const { eq } = await import("drizzle-orm");
+    const { ENGINE_COEFFICIENTS } = await import("@/lib/scrub");
+    const stored = await call(getComparison, team.estimator.cookie, "x", {
+      params: { id: comparisonId },
+    });
+    const [est] = await db
+      .select()
+      .from(estimates)
+      .where(eq(estimates.id, stored.body.estimateId as string));
+    // As features/calibration stores a calibrated estimate: scaled options and the fit behind them.
+    const calibration = {
+      source: "machine",
+      multipliers: { base: 1.5, scrub: 0.7 },
+      r2: 0.88,
+      n: 18,
+      hoursCovered: 420,
+    };
+    const { id: _id, createdAt: _c, ...copy } = est!;
+    const [calibrated] = await db
+      .insert(estimates)
+      .values({
+        ...copy,
+        title: `${est!.title} · calibrated`,
+        inputs: {
+          ...(est!.inputs as object),
+          options: {
+            baseWearPerKm: ENGINE_COEFFICIENTS.BASE_WEAR_MM_PER_KM * 1.5,
+            abradability: ENGINE_COEFFICIENTS.ABRADABILITY * 0.7,
+          },
+          calibration,
+        },
+      })
+      .returning({ id: estimates.id });
+    const cmp = await call(createComparison, team.estimator.cookie, "/api/v1/comparisons", {
+      method: "POST",
+      body: { estimateId: calibrated!.id, options: OPTIONS, hours: 2000 },
+    });
+    expect(cmp.status).toBe(201);
+    expect(cmp.body.result.current.costPerHour).not.toBeCloseTo(
+      comparison.result.current.costPerHour,
+      6,
+    );
+    const created = await call(createReport, team.estimator.cookie, "/api/v1/reports", {
+      method: "POST",
+      body: { comparisonId: cmp.body.id },
+    });
+    const id = created.body.id as string;
+    const issued = await call(issue, team.estimator.cookie, "x", {
+      method: "POST",
+      params: { id },
+    });
+    expect(issued.status).toBe(201);
+    const c = issued.body.content;
+    expect(c.options[0].costPerHour).toBeCloseTo(cmp.body.result.current.costPerHour, 9);
+    const note = c.assumptions.find((a: { topic: string }) => a.topic === "Calibration");
+    expect(note.text).toContain("calibrated from 18 of this machine's tread readings");
+  });
+
   it("issuing freezes the machine as fitted and every option with its payback, reasons and cautions", async () => {
     const { v1 } = await issuedFromComparison();
     const c = v1.content;

@@ -40,11 +40,11 @@ describe("reportFileName", () => {
     expect(
       reportFileName({
         customer: "Hollin Vale Farm",
-        machine: "Fendt-like 140 hp!",
+        machine: "Tarnbeck-style 140 hp!",
         version: 2,
         ext: "pdf",
       }),
-    ).toBe("hollin-vale-farm-fendt-like-140-hp-v2.pdf");
+    ).toBe("hollin-vale-farm-tarnbeck-style-140-hp-v2.pdf");
     expect(
       reportFileName({
         customer: "Ærø Gård",
@@ -120,6 +120,57 @@ describe("buildReportContent", () => {
   it("prices each position's replacement from its axle's tyre", () => {
     const front = content.options[0]!.positions.find((p) => p.position === "front-left")!;
     expect(front.replacementCost).toBe(base.axles.front.tyre.price);
+  });
+});
+
+describe("buildReportContent with a calibration", () => {
+  const machine = DEMO_MACHINES.find((d) => d.id === "row-crop-tractor")!.machine as TMachineInput;
+  const cycle = DEMO_DUTY_CYCLES["row-crop-tractor"]!;
+  const build = (calibration: Parameters<typeof buildReportContent>[0]["calibration"]) =>
+    buildReportContent({
+      kind: "estimate",
+      title: "Calibrated",
+      currency: "GBP",
+      dealership: { name: "Test dealership", contactLine: "" },
+      customer: { name: "Test farm", contactName: null },
+      dutyCycle: cycle,
+      options: [
+        {
+          key: "current",
+          label: "As fitted",
+          baseline: true,
+          estimateId: null,
+          oneOffCost: 0,
+          machine,
+          result: estimate(machine, cycle),
+        },
+      ],
+      recommendations: "",
+      customerNote: "",
+      issuedAt: new Date("2026-12-02T00:00:00Z"),
+      issuedBy: "Tester",
+      calibration,
+    });
+
+  it("says the figures are calibrated, on what readings, and marks every position", () => {
+    const content = build({
+      source: "machine",
+      multipliers: { base: 1.3, scrub: 0.8 },
+      r2: 0.91,
+      n: 24,
+      hoursCovered: 640,
+    });
+    const note = content.assumptions.find((a) => a.topic === "Calibration")!;
+    expect(note.text).toContain("calibrated from 24 of this machine's tread readings over 640");
+    expect(note.text).toContain("rolling wear × 1.30, scrub wear × 0.80");
+    expect(content.options[0]!.positions.every((p) => p.calibrated)).toBe(true);
+  });
+
+  it("says the defaults are uncalibrated when there is none", () => {
+    const content = build(null);
+    const note = content.assumptions.find((a) => a.topic === "Calibration")!;
+    expect(note.text).toMatch(/uncalibrated defaults/);
+    expect(content.options[0]!.positions.some((p) => p.calibrated)).toBe(false);
   });
 });
 
