@@ -1,0 +1,214 @@
+/**
+ * Geometric least-squares fit of a straight–arc–straight path (tangent, circular arc, tangent)
+ * to position fixes: the arc's centre, radius and the angles of its two tangent points are
+ * chosen to minimise the sum of squared orthogonal distances from the fixes to the path.
+ * Fixes before the entry tangent point are measured against the entry tangent line, those
+ * after the exit tangent point against the exit line, the rest against the circle, so the two
+ * straights hold the arc's ends and heading change while the arc's offset from them fixes the
+ * radius. With isotropic Gaussian receiver noise of equal spread at every fix, the unweighted
+ * orthogonal-distance fit is the maximum-likelihood estimate.
+ *
+ * Method: geometric (orthogonal distance) fitting by Levenberg–Marquardt, as for circles in
+ * N. Chernov, "Circular and Linear Regression: Fitting Circles and Lines by Least Squares"
+ * (CRC Press, 2010), ch. 4, extended here with the two tangent lines as constraints; the start
+ * comes from the heading fit of fit-heading-ramp.ts. The 5×5 normal equations are solved with
+ * ml-matrix.
+ */
+import { Matrix, solve } from "ml-matrix";
+
+export type TTangentArc = {
+  cx: number;
+  cy: number;
+  radius: number;
+  /** Angle of the entry tangent point seen from the centre (rad, counter-clockwise from +x). */
+  theta0: number;
+  /** Angle swept along the arc (rad, > 0); the arc runs counter-clockwise when dir = 1. */
+  sweep: number;
+  dir: 1 | -1;
+};
+
+export type TTangentArcFit = TTangentArc & {
+  /** Fixes [0, entryCount) lie on the entry straight, [n − exitCount, n) on the exit one. */
+  entryCount: number;
+  exitCount: number;
+  /**
+   * Where the tangent points fall between fixes, as fractional indices into the fixes
+   * (interpolated on the along-track coordinate): to time the arc's start and end.
+   */
+  entryAt: number;
+  exitAt: number;
+  /** Root-mean-square orthogonal distance of the fixes from the fitted path (m). */
+  rms: number;
+};
+
+/** Fixes in the order driven, on a local east/north plane (m). */
+export type TFixes = { x: ArrayLike<number>; y: ArrayLike<number>; length: number };
+
+const MAX_ITERATIONS = 60;
+
+/** Splits the fixes into entry straight, arc and exit straight for the given path. */
+function split(f: TFixes, p: TTangentArc) {
+  const { cx, cy, radius: r, theta0, sweep, dir } = p;
+  const theta1 = theta0 + dir * sweep;
+  // Along-track coordinate from a tangent point, along the direction of travel there.
+  const along = (i: number, th: number) => {
+    const tx = r * Math.cos(th) + cx;
+    const ty = r * Math.sin(th) + cy;
+    return (f.x[i]! - tx) * -dir * Math.sin(th) + (f.y[i]! - ty) * dir * Math.cos(th);
+  };
+  const crossing = (i: number, th: number) => {
+    if (i <= 0) return 0;
+    if (i >= f.length) return f.length - 1;
+    const u = along(i - 1, th);
+    const v = along(i, th);
+    return v > u ? i - 1 + Math.min(1, Math.max(0, -u / (v - u))) : i - 0.5;
+  };
+  let entry = 0;
+  while (entry < f.length && along(entry, theta0) < 0) entry++;
+  let exit = 0;
+  while (exit < f.length - entry && along(f.length - 1 - exit, theta1) > 0) exit++;
+  return {
+    entry,
+    exit,
+    entryAt: () => crossing(entry, theta0),
+    exitAt: () => crossing(f.length - exit, theta1),
+  };
+}
+
+/** Residuals (and, when `jac` is given, their Jacobian rows) of every fix. */
+function residuals(f: TFixes, p: TTangentArc, res: Float64Array, jac?: Float64Array): number {
+  const { cx, cy, radius: r, theta0, sweep, dir } = p;
+  const theta1 = theta0 + dir * sweep;
+  const { entry, exit } = split(f, p);
+  const c0 = Math.cos(theta0);
+  const s0 = Math.sin(theta0);
+  const c1 = Math.cos(theta1);
+  const s1 = Math.sin(theta1);
+  let sse = 0;
+  for (let i = 0; i < f.length; i++) {
+    const dx = f.x[i]! - cx;
+    const dy = f.y[i]! - cy;
+    let e: number;
+    const k = i * 5;
+    if (i < entry || i >= f.length - exit) {
+      // Distance from a tangent line = projection on the radius to the tangent point − R.
+      const first = i < entry;
+      const c = first ? c0 : c1;
+      const s = first ? s0 : s1;
+      e = dx * c + dy * s - r;
+      if (jac) {
+        const dTheta = -dx * s + dy * c;
+        jac[k] = -c;
+        jac[k + 1] = -s;
+        jac[k + 2] = -1;
+        jac[k + 3] = dTheta;
+        jac[k + 4] = first ? 0 : dir * dTheta;
+      }
+    } else {
+      const rho = Math.hypot(dx, dy);
+      e = rho - r;
+      if (jac) {
+        jac[k] = rho > 0 ? -dx / rho : 0;
+        jac[k + 1] = rho > 0 ? -dy / rho : 0;
+        jac[k + 2] = -1;
+        jac[k + 3] = 0;
+        jac[k + 4] = 0;
+      }
+    }
+    res[i] = e;
+    sse += e * e;
+  }
+  return sse;
+}
+
+function withStep(p: TTangentArc, d: readonly number[]): TTangentArc {
+  return {
+    cx: p.cx + d[0]!,
+    cy: p.cy + d[1]!,
+    radius: p.radius + d[2]!,
+    theta0: p.theta0 + d[3]!,
+    sweep: p.sweep + d[4]!,
+    dir: p.dir,
+  };
+}
+
+/**
+ * Refines `start` to the least-squares straight–arc–straight path through the fixes; undefined
+ * when at the optimum fewer than `minEdge` fixes lie on either straight or fewer than `minArc`
+ * on the arc (then the data cannot place the arc's ends), or when the fit breaks down.
+ */
+export function fitTangentArc(
+  fixes: TFixes,
+  start: TTangentArc,
+  { minEdge = 2, minArc = 3 }: { minEdge?: number; minArc?: number } = {},
+): TTangentArcFit | undefined {
+  const n = fixes.length;
+  if (n < 2 * minEdge + minArc || !(start.radius > 0) || !(start.sweep > 0)) return undefined;
+  const res = new Float64Array(n);
+  const jac = new Float64Array(n * 5);
+  let p = start;
+  let sse = residuals(fixes, p, res, jac);
+  let lambda = 1e-3;
+  const scale = Math.max(start.radius, 1);
+  let converged = false;
+  for (let iter = 0; iter < MAX_ITERATIONS && !converged; iter++) {
+    // Normal equations JᵀJ d = −Jᵀr, damped on the diagonal (Marquardt's scaling).
+    const jtj = new Float64Array(25);
+    const jtr = new Float64Array(5);
+    for (let i = 0; i < n; i++) {
+      const k = i * 5;
+      for (let a = 0; a < 5; a++) {
+        const ja = jac[k + a]!;
+        jtr[a] = jtr[a]! + ja * res[i]!;
+        for (let b = a; b < 5; b++) jtj[a * 5 + b] = jtj[a * 5 + b]! + ja * jac[k + b]!;
+      }
+    }
+    let improved = false;
+    for (let attempt = 0; attempt < 10 && !improved; attempt++) {
+      const a = new Matrix(5, 5);
+      for (let r = 0; r < 5; r++) {
+        for (let c = r; c < 5; c++) {
+          // A parameter the fixes do not touch (no fix on a straight) must not make it singular.
+          const v = r === c ? jtj[r * 5 + c]! * (1 + lambda) + 1e-12 : jtj[r * 5 + c]!;
+          a.set(r, c, v);
+          a.set(c, r, v);
+        }
+      }
+      let d: number[];
+      try {
+        d = solve(a, Matrix.columnVector(Array.from(jtr, (v) => -v))).to1DArray();
+      } catch {
+        return undefined; // singular even when damped: the fixes cannot hold this path
+      }
+      if (!d.every(Number.isFinite)) return undefined;
+      const q = withStep(p, d);
+      if (!(q.radius > 0) || !(q.sweep > 0)) {
+        lambda *= 10;
+        continue;
+      }
+      const resQ = new Float64Array(n);
+      const sseQ = residuals(fixes, q, resQ);
+      if (sseQ <= sse) {
+        const small =
+          Math.hypot(d[0]!, d[1]!, d[2]!) < 1e-7 * scale && Math.hypot(d[3]!, d[4]!) < 1e-9;
+        p = q;
+        sse = residuals(fixes, p, res, jac);
+        lambda = Math.max(lambda / 10, 1e-9);
+        improved = true;
+        converged = small || sse === 0;
+      } else lambda *= 10;
+    }
+    if (!improved) break;
+  }
+  const { entry, exit, entryAt, exitAt } = split(fixes, p);
+  if (entry < minEdge || exit < minEdge || n - entry - exit < minArc) return undefined;
+  if (!Number.isFinite(sse)) return undefined;
+  return {
+    ...p,
+    entryCount: entry,
+    exitCount: exit,
+    entryAt: entryAt(),
+    exitAt: exitAt(),
+    rms: Math.sqrt(sse / n),
+  };
+}
