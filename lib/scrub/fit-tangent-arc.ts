@@ -51,27 +51,30 @@ function split(f: TFixes, p: TTangentArc) {
   const { cx, cy, radius: r, theta0, sweep, dir } = p;
   const theta1 = theta0 + dir * sweep;
   // Along-track coordinate from a tangent point, along the direction of travel there.
-  const along = (i: number, th: number) => {
-    const tx = r * Math.cos(th) + cx;
-    const ty = r * Math.sin(th) + cy;
-    return (f.x[i]! - tx) * -dir * Math.sin(th) + (f.y[i]! - ty) * dir * Math.cos(th);
+  const tangent = (th: number) => {
+    const c = Math.cos(th);
+    const s = Math.sin(th);
+    return { x: cx + r * c, y: cy + r * s, ux: -dir * s, uy: dir * c };
   };
-  const crossing = (i: number, th: number) => {
+  const t0 = tangent(theta0);
+  const t1 = tangent(theta1);
+  const along = (i: number, t: typeof t0) => (f.x[i]! - t.x) * t.ux + (f.y[i]! - t.y) * t.uy;
+  const crossing = (i: number, t: typeof t0) => {
     if (i <= 0) return 0;
     if (i >= f.length) return f.length - 1;
-    const u = along(i - 1, th);
-    const v = along(i, th);
+    const u = along(i - 1, t);
+    const v = along(i, t);
     return v > u ? i - 1 + Math.min(1, Math.max(0, -u / (v - u))) : i - 0.5;
   };
   let entry = 0;
-  while (entry < f.length && along(entry, theta0) < 0) entry++;
+  while (entry < f.length && along(entry, t0) < 0) entry++;
   let exit = 0;
-  while (exit < f.length - entry && along(f.length - 1 - exit, theta1) > 0) exit++;
+  while (exit < f.length - entry && along(f.length - 1 - exit, t1) > 0) exit++;
   return {
     entry,
     exit,
-    entryAt: () => crossing(entry, theta0),
-    exitAt: () => crossing(f.length - exit, theta1),
+    entryAt: () => crossing(entry, t0),
+    exitAt: () => crossing(f.length - exit, t1),
   };
 }
 
