@@ -147,8 +147,11 @@ export function fitTangentArc(
 ): TTangentArcFit | undefined {
   const n = fixes.length;
   if (n < 2 * minEdge + minArc || !(start.radius > 0) || !(start.sweep > 0)) return undefined;
-  const res = new Float64Array(n);
-  const jac = new Float64Array(n * 5);
+  // Current and trial residuals and Jacobians, swapped when a trial step is taken.
+  let res = new Float64Array(n);
+  let jac = new Float64Array(n * 5);
+  let resQ = new Float64Array(n);
+  let jacQ = new Float64Array(n * 5);
   let p = start;
   let sse = residuals(fixes, p, res, jac);
   let lambda = 1e-3;
@@ -189,13 +192,14 @@ export function fitTangentArc(
         lambda *= 10;
         continue;
       }
-      const resQ = new Float64Array(n);
-      const sseQ = residuals(fixes, q, resQ);
+      const sseQ = residuals(fixes, q, resQ, jacQ);
       if (sseQ <= sse) {
         const small =
           Math.hypot(d[0]!, d[1]!, d[2]!) < 1e-7 * scale && Math.hypot(d[3]!, d[4]!) < 1e-9;
         p = q;
-        sse = residuals(fixes, p, res, jac);
+        sse = sseQ;
+        [res, resQ] = [resQ, res];
+        [jac, jacQ] = [jacQ, jac];
         lambda = Math.max(lambda / 10, 1e-9);
         improved = true;
         converged = small || sse === 0;
