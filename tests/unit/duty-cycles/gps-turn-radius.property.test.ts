@@ -12,8 +12,9 @@
 // quarter turn of 5 m driven at 1 m/s and logged at 1 Hz with 10 cm noise (8 fixes on the arc,
 // a real case: a slow loader, a sparse log) it is 3 %, so one read in ten is off by more than
 // 5 % whatever the method. Where four standard errors exceed 5 % (about 5 % of the cases drawn
-// here, all of them quarter-to-half turns of 4–6 m with 8–10 cm noise), the test asks for the
-// radius within four standard errors instead: the fit is then as good as the data allow.
+// here, which favour the edges of the range: turns of 90° to about 135°, 4–16 m, 4–10 cm
+// noise), the test asks for the radius within four standard errors instead. The generator's
+// domain is not narrowed; measured figures and the method: docs/turn-detection.md.
 import fc from "fast-check";
 import { getPathLength, getPreciseDistance } from "geolib";
 import { Matrix, inverse } from "ml-matrix";
