@@ -9,7 +9,7 @@
  * angle is positive to the left. A negative speed means the machine is reversing.
  */
 import { fitHeadingRamp } from "./fit-heading-ramp";
-import { fitTangentArc } from "./fit-tangent-arc";
+import { fitArcToFixes, interpolate, type TFixPoints } from "./gps-arc";
 
 /**
  * One telematics sample: s, m/s (negative when reversing), deg/s, deg, deg, decimal degrees.
@@ -410,7 +410,7 @@ type OpenTurn = {
   /** GPS course points of the turn with its run-in (and, once ended, its run-out). */
   course: CoursePoints;
   /** GPS fixes over the same stretch, for the fit of the arc to the positions. */
-  fixes: FixPoints;
+  fixes: TFixPoints;
   surface: string | undefined;
   laden: number;
   /** Number of steps up to and including the last one that was still turning. */
@@ -423,9 +423,6 @@ type OpenTurn = {
 
 /** GPS course points: distance (m), course (deg), time (s), chord (m), in order of distance. */
 type CoursePoints = { s: number[]; psi: number[]; t: number[]; chord: number[] };
-
-/** GPS fixes: east, north (m), distance (m), time (s), stretch of driving, in order. */
-type FixPoints = { x: number[]; y: number[]; s: number[]; t: number[]; run: number[] };
 
 /**
  * The latest GPS fixes, for the run-in of a turn that opens: bounded, oldest dropped. Fixes
@@ -460,8 +457,8 @@ class FixHistory {
    * Fixes from distance `from` onwards, or the latest `atLeast` when that reaches further back
    * (sparse logs), never before the floor; oldest first.
    */
-  since(from: number, atLeast: number): FixPoints {
-    const out: FixPoints = { x: [], y: [], s: [], t: [], run: [] };
+  since(from: number, atLeast: number): TFixPoints {
+    const out: TFixPoints = { x: [], y: [], s: [], t: [], run: [] };
     const first = Math.max(0, this.count - this.size);
     let i = this.count;
     while (i > first) {
@@ -481,7 +478,7 @@ class FixHistory {
   }
 }
 
-function addFix(into: FixPoints, r: StepRing, k: number) {
+function addFix(into: TFixPoints, r: StepRing, k: number) {
   const x = r.fixX[k]!;
   // The fix that opens a turn is already in its run-in from the history.
   if (Number.isNaN(x) || into.t[into.t.length - 1] === r.t[k]) return;
@@ -883,17 +880,6 @@ class Segmenter implements TTurnSegmenter {
   }
 }
 
-/** y at x on the polyline (xs ascending, at least one point), straight on past either end. */
-function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {
-  const n = xs.length;
-  if (n === 1) return ys[0]!;
-  let i = 1;
-  while (i < n - 1 && xs[i]! < x) i++;
-  const x0 = xs[i - 1]!;
-  const x1 = xs[i]!;
-  return x1 > x0 ? ys[i - 1]! + ((ys[i]! - ys[i - 1]!) * (x - x0)) / (x1 - x0) : ys[i]!;
-}
-
 /** Detects the turns in a whole log held in memory. */
 export function segmentTurns(
   samples: readonly TTurnSample[],
@@ -904,76 +890,4 @@ export function segmentTurns(
   for (const s of samples) turns.push(...segmenter.push(s));
   turns.push(...segmenter.finish());
   return turns;
-}
-
-/** Largest disagreement with the heading fit at which the position fit is still trusted. */
-const MAX_SWEEP_CHANGE = 20; // deg
-const MAX_RADIUS_RATIO = 1.4;
-
-/**
- * The arc fitted to the GPS fixes themselves (fit-tangent-arc.ts), started from the heading
- * fit: its ends on the course points place the tangent points, its headings the tangent
- * lines. Undefined when the fixes cannot carry the fit (too few on a straight or the arc, a
- * stop or a change of direction inside it) or it strays far from the heading fit, which then
- * stands.
- */
-function fitArcToFixes(
-  f: FixPoints,
-  ramp: { a: number; b: number; psi0: number; psi1: number },
-  reverse: boolean,
-) {
-  const n = f.x.length;
-  if (n < 7) return undefined;
-  // Only the stretch of unbroken driving that holds the middle of the arc.
-  const midS = (ramp.a + ramp.b) / 2;
-  let m = 0;
-  while (m < n - 1 && f.s[m]! < midS) m++;
-  const run = f.run[m]!;
-  let lo = m;
-  while (lo > 0 && f.run[lo - 1] === run) lo--;
-  let hi = m;
-  while (hi < n - 1 && f.run[hi + 1] === run) hi++;
-  const xs = f.x.slice(lo, hi + 1);
-  const ys = f.y.slice(lo, hi + 1);
-  const ss = f.s.slice(lo, hi + 1);
-  const ts = f.t.slice(lo, hi + 1);
-  const dPsi = ramp.psi1 - ramp.psi0;
-  const dir = dPsi > 0 ? 1 : -1;
-  const sweep = Math.abs(dPsi) * DEG;
-  const radius = (ramp.b - ramp.a) / sweep;
-  // Course of travel at the entry (the machine points the other way in reverse); the tangent
-  // point lies a quarter turn from it, seen from the centre.
-  const theta0 = (ramp.psi0 + (reverse ? 180 : 0) - dir * 90) * DEG;
-  const tx = interpolate(ss, xs, ramp.a);
-  const ty = interpolate(ss, ys, ramp.a);
-  const arc = fitTangentArc(
-    { x: xs, y: ys, length: xs.length },
-    {
-      cx: tx - radius * Math.cos(theta0),
-      cy: ty - radius * Math.sin(theta0),
-      radius,
-      theta0,
-      sweep,
-      dir,
-    },
-  );
-  if (!arc) return undefined;
-  const ratio = arc.radius / radius;
-  if (
-    Math.abs(arc.sweep - sweep) / DEG > MAX_SWEEP_CHANGE ||
-    ratio > MAX_RADIUS_RATIO ||
-    ratio < 1 / MAX_RADIUS_RATIO
-  ) {
-    return undefined;
-  }
-  const at = (u: number) => {
-    const i = Math.min(Math.floor(u), ts.length - 2);
-    return ts[i]! + (ts[i + 1]! - ts[i]!) * (u - i);
-  };
-  return {
-    start: at(arc.entryAt),
-    end: at(arc.exitAt),
-    headingChange: arc.sweep / DEG,
-    distance: arc.radius * arc.sweep,
-  };
 }
