@@ -158,31 +158,74 @@ export function fitTangentArc(
   const scale = Math.max(start.radius, 1);
   let converged = false;
   for (let iter = 0; iter < MAX_ITERATIONS && !converged; iter++) {
-    // Normal equations JᵀJ d = −Jᵀr, damped on the diagonal (Marquardt's scaling).
-    const jtj = new Float64Array(25);
-    const jtr = new Float64Array(5);
+    // Normal equations JᵀJ d = −Jᵀr, damped on the diagonal (Marquardt's scaling). The sums
+    // are plain locals: this loop is the fit's hot spot.
+    let a00 = 0,
+      a01 = 0,
+      a02 = 0,
+      a03 = 0,
+      a04 = 0,
+      a11 = 0,
+      a12 = 0,
+      a13 = 0,
+      a14 = 0;
+    let a22 = 0,
+      a23 = 0,
+      a24 = 0,
+      a33 = 0,
+      a34 = 0,
+      a44 = 0;
+    let g0 = 0,
+      g1 = 0,
+      g2 = 0,
+      g3 = 0,
+      g4 = 0;
     for (let i = 0; i < n; i++) {
       const k = i * 5;
-      for (let a = 0; a < 5; a++) {
-        const ja = jac[k + a]!;
-        jtr[a] = jtr[a]! + ja * res[i]!;
-        for (let b = a; b < 5; b++) jtj[a * 5 + b] = jtj[a * 5 + b]! + ja * jac[k + b]!;
-      }
+      const j0 = jac[k]!;
+      const j1 = jac[k + 1]!;
+      const j2 = jac[k + 2]!;
+      const j3 = jac[k + 3]!;
+      const j4 = jac[k + 4]!;
+      const e = res[i]!;
+      a00 += j0 * j0;
+      a01 += j0 * j1;
+      a02 += j0 * j2;
+      a03 += j0 * j3;
+      a04 += j0 * j4;
+      a11 += j1 * j1;
+      a12 += j1 * j2;
+      a13 += j1 * j3;
+      a14 += j1 * j4;
+      a22 += j2 * j2;
+      a23 += j2 * j3;
+      a24 += j2 * j4;
+      a33 += j3 * j3;
+      a34 += j3 * j4;
+      a44 += j4 * j4;
+      g0 += j0 * e;
+      g1 += j1 * e;
+      g2 += j2 * e;
+      g3 += j3 * e;
+      g4 += j4 * e;
     }
+    const jtj = [
+      [a00, a01, a02, a03, a04],
+      [a01, a11, a12, a13, a14],
+      [a02, a12, a22, a23, a24],
+      [a03, a13, a23, a33, a34],
+      [a04, a14, a24, a34, a44],
+    ];
+    const minusJtr = Matrix.columnVector([-g0, -g1, -g2, -g3, -g4]);
     let improved = false;
     for (let attempt = 0; attempt < 10 && !improved; attempt++) {
-      const a = new Matrix(5, 5);
-      for (let r = 0; r < 5; r++) {
-        for (let c = r; c < 5; c++) {
-          // A parameter the fixes do not touch (no fix on a straight) must not make it singular.
-          const v = r === c ? jtj[r * 5 + c]! * (1 + lambda) + 1e-12 : jtj[r * 5 + c]!;
-          a.set(r, c, v);
-          a.set(c, r, v);
-        }
-      }
+      // A parameter the fixes do not touch (no fix on a straight) must not make it singular.
+      const a = new Matrix(
+        jtj.map((row, r) => row.map((v, c) => (r === c ? v * (1 + lambda) + 1e-12 : v))),
+      );
       let d: number[];
       try {
-        d = solve(a, Matrix.columnVector(Array.from(jtr, (v) => -v))).to1DArray();
+        d = solve(a, minusJtr).to1DArray();
       } catch {
         return undefined; // singular even when damped: the fixes cannot hold this path
       }

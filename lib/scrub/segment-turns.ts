@@ -858,19 +858,25 @@ class Segmenter implements TTurnSegmenter {
     const a0 = coreStart - lag;
     const b0 = coreEnd - lag;
     const reach = Math.max(this.o.gpsBaseline, 0.3 * (b0 - a0));
+    // The fit to the positions starts from the detector's core (heading change summed over the
+    // turn, arc between the half-plateau crossings); the heading fit is the fallback, and a
+    // better start when the core is too far off for the fit to the positions to be trusted.
+    const psi0 = interpolate(c.s, c.psi, a0);
+    const fromCore = fitArcToFixes(
+      turn.fixes,
+      { a: a0, b: b0, psi0, psi1: psi0 + psiSum },
+      reverse,
+    );
+    if (fromCore) return fromCore;
     const ramp = fitHeadingRamp({ ...c, length: n }, { a: a0, b: b0, reach });
     const dPsi = ramp ? ramp.psi1 - ramp.psi0 : 0;
     const fit =
       ramp && Math.sign(dPsi) === Math.sign(psiSum) && Math.abs(dPsi) >= this.o.minHeadingChange
         ? ramp
         : undefined;
-    // The position fit starts from the heading fit, or from the detector's core when a sparse
-    // log leaves too few course points on the straights for the heading fit.
-    const psi0 = interpolate(c.s, c.psi, a0);
-    const seed = fit ?? { a: a0, b: b0, psi0, psi1: psi0 + psiSum };
-    const onPositions = fitArcToFixes(turn.fixes, seed, reverse);
-    if (onPositions) return onPositions;
     if (!fit) return undefined;
+    const onPositions = fitArcToFixes(turn.fixes, fit, reverse);
+    if (onPositions) return onPositions;
     return {
       start: interpolate(c.s, c.t, fit.a),
       end: interpolate(c.s, c.t, fit.b),
