@@ -588,8 +588,11 @@ class Segmenter implements TTurnSegmenter {
         /** and until the turn holds this many fixes. */
         fixesUntil: number;
         untilT: number;
-        /** Another turn has begun: no more fixes of run-out. */
-        cut: boolean;
+        /**
+         * Where another turn began (m), Infinity while none has: fixes after it are no run-out.
+         * Reset when that turn proves too small to count (receiver noise on a sparse log).
+         */
+        cutS: number;
       }
     | undefined;
   private readonly history = new CourseHistory();
@@ -739,16 +742,22 @@ class Segmenter implements TTurnSegmenter {
       this.append(turn, k, rate);
       turn.psi = turn.psiAll;
       this.open = turn;
-      if (this.pending) this.pending.cut = true;
+      if (this.pending && this.pending.cutS === Infinity) {
+        this.pending.cutS = r.s[k]! - r.ds[k]!;
+      }
     }
   }
 
   /** An ended turn: GPS turns wait for their run-out, the rest are measured now. */
   private end(turn: OpenTurn) {
+    // Too small to be a turn (receiver noise, a lane change): gone, and no bound on run-ins;
+    // the turn before it goes on collecting its run-out.
+    if (Math.abs(turn.psi) < this.o.minHeadingChange) {
+      if (this.pending) this.pending.cutS = Infinity;
+      return;
+    }
     // Output stays in order: the turn before this one is measured first.
     this.settlePending();
-    // Too small to be a turn (receiver noise, a lane change): gone, and no bound on run-ins.
-    if (Math.abs(turn.psi) < this.o.minHeadingChange) return;
     const lastS = turn.s[turn.activeLen - 1]!;
     // The next turn's run-in starts after this one.
     this.history.floor = lastS;
@@ -762,7 +771,7 @@ class Segmenter implements TTurnSegmenter {
       fixesUntilS: lastS + FIX_MARGIN,
       fixesUntil: turn.fixes.x.length + FIX_MARGIN_COUNT,
       untilT: lastT + RUN_OUT_WAIT,
-      cut: false,
+      cutS: Infinity,
     };
   }
 
@@ -773,8 +782,8 @@ class Segmenter implements TTurnSegmenter {
     const r = this.ring;
     const s = r.s[k]!;
     if (s - r.ds[k]! < p.untilS) addCoursePoint(p.turn.course, r, k);
-    if (!p.cut) addFix(p.turn.fixes, r, k);
-    const fixesDone = p.cut || (s >= p.fixesUntilS && p.turn.fixes.x.length >= p.fixesUntil);
+    addFix(p.turn.fixes, r, k);
+    const fixesDone = s >= p.fixesUntilS && p.turn.fixes.x.length >= p.fixesUntil;
     if ((s >= p.untilS && fixesDone) || r.t[k]! >= p.untilT) this.settlePending();
   }
 
@@ -782,6 +791,11 @@ class Segmenter implements TTurnSegmenter {
     const p = this.pending;
     if (!p) return;
     this.pending = undefined;
+    // A turn under way (or undecided) when the run-out ends: its fixes are not run-out.
+    const f = p.turn.fixes;
+    let n = f.s.length;
+    while (n > 0 && f.s[n - 1]! > p.cutS) n--;
+    f.x.length = f.y.length = f.s.length = f.t.length = f.run.length = n;
     this.close(p.turn);
   }
 
