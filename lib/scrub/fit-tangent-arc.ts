@@ -10,8 +10,9 @@
  *
  * Method: geometric (orthogonal distance) fitting by Levenberg–Marquardt, as for circles in
  * N. Chernov, "Circular and Linear Regression: Fitting Circles and Lines by Least Squares"
- * (CRC Press, 2010), ch. 4, extended here with the two tangent lines as constraints; the start
- * comes from the heading fit of fit-heading-ramp.ts. The 5×5 normal equations are solved with
+ * (CRC Press, 2010; chapter from memory: 4, geometric circle fits), extended here with the two
+ * tangent lines as constraints; D. W. Marquardt, SIAM J. Appl. Math. 11 (1963) for the damping.
+ * The start comes from the caller (gps-arc.ts). The 5×5 normal equations are solved with
  * ml-matrix.
  */
 import { Matrix, solve } from "ml-matrix";

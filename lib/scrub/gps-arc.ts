@@ -1,7 +1,7 @@
 /**
  * A GPS turn's arc from its fixes: picks the stretch of unbroken driving that holds the arc,
- * starts the straight–arc–straight fit of fit-tangent-arc.ts from the heading fit and turns
- * its result into the turn's measures. Method: docs/turn-detection.md, step 5.
+ * starts the straight–arc–straight fit of fit-tangent-arc.ts from a guess of the arc (the
+ * detector's core, or the heading fit) and turns its result into the turn's measures. Method: docs/turn-detection.md, step 5.
  */
 import { fitTangentArc } from "./fit-tangent-arc";
 
@@ -10,16 +10,16 @@ const DEG = Math.PI / 180;
 /** GPS fixes: east, north (m), distance (m), time (s), stretch of driving, in order. */
 export type TFixPoints = { x: number[]; y: number[]; s: number[]; t: number[]; run: number[] };
 
-/** Largest disagreement with the heading fit at which the position fit is still trusted. */
+/** Largest disagreement with its start at which the fit to the positions is still trusted. */
 const MAX_SWEEP_CHANGE = 20; // deg
 const MAX_RADIUS_RATIO = 1.4;
 
 /**
- * The arc fitted to the GPS fixes themselves (fit-tangent-arc.ts), started from the heading
- * fit: its ends on the course points place the tangent points, its headings the tangent
- * lines. Undefined when the fixes cannot carry the fit (too few on a straight or the arc, a
- * stop or a change of direction inside it) or it strays far from the heading fit, which then
- * stands.
+ * The arc fitted to the GPS fixes themselves (fit-tangent-arc.ts), started from a guess: arc
+ * from distance a to b, heading (deg, left positive) ψ0 before it and ψ1 after. The guess's
+ * ends place the tangent points on the fixes, its headings the tangent lines. Undefined when
+ * the fixes cannot carry the fit (too few on a straight or the arc, a stop or a change of
+ * direction inside it) or it strays far from the guess; the caller then falls back.
  */
 export function fitArcToFixes(
   f: TFixPoints,
