@@ -9,6 +9,7 @@
  * angle is positive to the left. A negative speed means the machine is reversing.
  */
 import { fitHeadingRamp } from "./fit-heading-ramp";
+import { fitArcToFixes, interpolate, type TFixPoints } from "./gps-arc";
 
 /**
  * One telematics sample: s, m/s (negative when reversing), deg/s, deg, deg, decimal degrees.
@@ -88,6 +89,17 @@ const DEG = Math.PI / 180;
 const COURSE_POINT_SPACING = 1 / 8;
 /** Run-in and run-out kept around a GPS turn for the arc fit, in GPS baselines. */
 const FIT_MARGIN = 3;
+/**
+ * GPS fixes kept around a turn for the fit to the positions: this far (m), and at least this
+ * many fixes, each side. The straights fix the tangent lines, whose place at the corner sets
+ * the radius: a longer run-in and run-out narrows the radius several times more than the
+ * course points' margin would (the fix history stops at the previous turn, and the run-out at
+ * the next one, so nothing of another turn gets in).
+ */
+const FIX_MARGIN = 30;
+const FIX_MARGIN_COUNT = 20;
+/** A turn waiting for its run-out is measured at the latest this long after it ended (s). */
+const RUN_OUT_WAIT = 30;
 /** Positions kept for the GPS course chord; at very slow speed the chord is simply shorter. */
 const POSITION_RING = 512;
 const EARTH_RADIUS = 6_371_008.8; // mean Earth radius (m), IUGG
@@ -122,6 +134,14 @@ type Step = {
   courseT: number;
   /** Length of that chord along the path (m). */
   courseC: number;
+  /**
+   * The GPS fix of this sample on the local east/north plane (m), NaN when none was used, and
+   * the stretch of unbroken driving in one direction it belongs to (a stop, a change between
+   * forward and reverse or a gap starts a new one: positions across it are no single path).
+   */
+  fixX: number;
+  fixY: number;
+  fixRun: number;
 };
 
 /** Turns raw samples into heading and distance increments, one source picked per sample. */
@@ -149,6 +169,7 @@ class HeadingTracker {
   /** The fix at or just before the latest chord's midpoint. */
   private mid = 0;
   private ringReverse = false;
+  private fixRun = 0;
 
   constructor(
     private readonly o: Required<Omit<TSegmentOptions, "wheelbase">> & { wheelbase?: number },
@@ -165,6 +186,7 @@ class HeadingTracker {
 
   private clearFixes() {
     this.back = this.next;
+    this.fixRun++;
   }
 
   /** When the machine had travelled `s` (within the kept fixes), from the fixes either side. */
@@ -213,6 +235,9 @@ class HeadingTracker {
     this.ps[k] = this.sTotal;
     this.pt[k] = s.t;
     this.next++;
+    out.fixX = x;
+    out.fixY = y;
+    out.fixRun = this.fixRun;
     const base2 = this.o.gpsBaseline ** 2;
     const far = (j: number) => {
       const dx = x - this.px[j & m]!;
@@ -261,6 +286,9 @@ class HeadingTracker {
     coursePsi: NaN,
     courseT: NaN,
     courseC: NaN,
+    fixX: NaN,
+    fixY: NaN,
+    fixRun: 0,
   };
 
   step(s: TTurnSample): Step {
@@ -273,6 +301,7 @@ class HeadingTracker {
     }
     const out = this.out;
     out.courseS = out.coursePsi = out.courseT = NaN;
+    out.fixX = out.fixY = NaN;
     const ds = restart
       ? 0
       : (Math.abs(this.prevSpeed) + Math.abs(speed)) * 0.5 * (s.t - this.prevT);
@@ -328,6 +357,9 @@ class StepRing {
   coursePsi = new Float64Array(64);
   courseT = new Float64Array(64);
   courseC = new Float64Array(64);
+  fixX = new Float64Array(64);
+  fixY = new Float64Array(64);
+  fixRun = new Float64Array(64);
   surface: (string | undefined)[] = new Array(64);
   laden = new Int8Array(64); // -1 unknown, 0 unladen, 1 laden
   mask = 63;
@@ -352,6 +384,9 @@ class StepRing {
     this.coursePsi = grow(this.coursePsi, (n) => new Float64Array(n));
     this.courseT = grow(this.courseT, (n) => new Float64Array(n));
     this.courseC = grow(this.courseC, (n) => new Float64Array(n));
+    this.fixX = grow(this.fixX, (n) => new Float64Array(n));
+    this.fixY = grow(this.fixY, (n) => new Float64Array(n));
+    this.fixRun = grow(this.fixRun, (n) => new Float64Array(n));
     this.laden = grow(this.laden, (n) => new Int8Array(n));
     const surface = new Array<string | undefined>(size);
     for (let i = from; i < from + this.mask + 1; i++)
@@ -374,6 +409,8 @@ type OpenTurn = {
   s: number[];
   /** GPS course points of the turn with its run-in (and, once ended, its run-out). */
   course: CoursePoints;
+  /** GPS fixes over the same stretch, for the fit of the arc to the positions. */
+  fixes: TFixPoints;
   surface: string | undefined;
   laden: number;
   /** Number of steps up to and including the last one that was still turning. */
@@ -386,6 +423,71 @@ type OpenTurn = {
 
 /** GPS course points: distance (m), course (deg), time (s), chord (m), in order of distance. */
 type CoursePoints = { s: number[]; psi: number[]; t: number[]; chord: number[] };
+
+/**
+ * The latest GPS fixes, for the run-in of a turn that opens: bounded, oldest dropped. Fixes
+ * before `floor` belong to the previous turn and are not handed on.
+ */
+class FixHistory {
+  private readonly size = 2048;
+  private readonly x = new Float64Array(this.size);
+  private readonly y = new Float64Array(this.size);
+  private readonly s = new Float64Array(this.size);
+  private readonly t = new Float64Array(this.size);
+  private readonly run = new Float64Array(this.size);
+  private count = 0;
+  floor = -Infinity;
+
+  push(r: StepRing, k: number) {
+    const i = this.count % this.size;
+    this.x[i] = r.fixX[k]!;
+    this.y[i] = r.fixY[k]!;
+    this.s[i] = r.s[k]!;
+    this.t[i] = r.t[k]!;
+    this.run[i] = r.fixRun[k]!;
+    this.count++;
+  }
+
+  clear() {
+    this.count = 0;
+    this.floor = -Infinity;
+  }
+
+  /**
+   * Fixes from distance `from` onwards, or the latest `atLeast` when that reaches further back
+   * (sparse logs), never before the floor; oldest first.
+   */
+  since(from: number, atLeast: number): TFixPoints {
+    const out: TFixPoints = { x: [], y: [], s: [], t: [], run: [] };
+    const first = Math.max(0, this.count - this.size);
+    let i = this.count;
+    while (i > first) {
+      const s = this.s[(i - 1) % this.size]!;
+      if (s < this.floor || (s < from && this.count - i >= atLeast)) break;
+      i--;
+    }
+    for (; i < this.count; i++) {
+      const k = i % this.size;
+      out.x.push(this.x[k]!);
+      out.y.push(this.y[k]!);
+      out.s.push(this.s[k]!);
+      out.t.push(this.t[k]!);
+      out.run.push(this.run[k]!);
+    }
+    return out;
+  }
+}
+
+function addFix(into: TFixPoints, r: StepRing, k: number) {
+  const x = r.fixX[k]!;
+  // The fix that opens a turn is already in its run-in from the history.
+  if (Number.isNaN(x) || into.t[into.t.length - 1] === r.t[k]) return;
+  into.x.push(x);
+  into.y.push(r.fixY[k]!);
+  into.s.push(r.s[k]!);
+  into.t.push(r.t[k]!);
+  into.run.push(r.fixRun[k]!);
+}
 
 /**
  * The latest course points, for the run-in of a turn that opens: bounded, oldest dropped.
@@ -477,8 +579,24 @@ class Segmenter implements TTurnSegmenter {
   private winDt = 0;
   private open: OpenTurn | undefined;
   /** A GPS turn that has ended, still collecting its run-out for the arc fit. */
-  private pending: { turn: OpenTurn; untilS: number; untilT: number } | undefined;
+  private pending:
+    | {
+        turn: OpenTurn;
+        /** Course points are collected up to this distance, fixes up to `fixesUntilS`. */
+        untilS: number;
+        fixesUntilS: number;
+        /** and until the turn holds this many fixes. */
+        fixesUntil: number;
+        untilT: number;
+        /**
+         * Where another turn began (m), Infinity while none has: fixes after it are no run-out.
+         * Reset when that turn proves too small to count (receiver noise on a sparse log).
+         */
+        cutS: number;
+      }
+    | undefined;
   private readonly history = new CourseHistory();
+  private readonly fixHistory = new FixHistory();
   private out: TDetectedTurn[] = [];
 
   constructor(
@@ -504,6 +622,9 @@ class Segmenter implements TTurnSegmenter {
     r.coursePsi[k] = step.coursePsi;
     r.courseT[k] = step.courseT;
     r.courseC[k] = step.courseC;
+    r.fixX[k] = step.fixX;
+    r.fixY[k] = step.fixY;
+    r.fixRun[k] = step.fixRun;
     r.surface[k] = step.surface;
     r.laden[k] = step.laden === undefined ? -1 : step.laden ? 1 : 0;
     this.tail++;
@@ -551,6 +672,7 @@ class Segmenter implements TTurnSegmenter {
     this.open = undefined;
     this.settlePending();
     this.history.clear();
+    this.fixHistory.clear();
     this.lo = this.hi = this.head = this.tail;
     this.winPsi = this.winDt = 0;
   }
@@ -566,6 +688,7 @@ class Segmenter implements TTurnSegmenter {
     turn.psiAll += r.dPsi[k]!;
     turn.s.push(r.s[k]!);
     addCoursePoint(turn.course, r, k);
+    addFix(turn.fixes, r, k);
   }
 
   private classify(k: number, rate: number) {
@@ -574,6 +697,7 @@ class Segmenter implements TTurnSegmenter {
     const turning = Math.abs(rate) >= o.yawThreshold;
     const sign = Math.sign(rate);
     if (!Number.isNaN(r.courseS[k]!)) this.history.push(r, k);
+    if (!Number.isNaN(r.fixX[k]!)) this.fixHistory.push(r, k);
     this.feedPending(k);
     const open = this.open;
     if (open) {
@@ -607,6 +731,7 @@ class Segmenter implements TTurnSegmenter {
         rate: [],
         s: [],
         course: this.history.since(r.s[k]! - o.gpsBaseline * FIT_MARGIN),
+        fixes: this.fixHistory.since(r.s[k]! - FIX_MARGIN, FIX_MARGIN_COUNT),
         surface: r.surface[k],
         laden: r.laden[k]!,
         activeLen: 1,
@@ -617,25 +742,36 @@ class Segmenter implements TTurnSegmenter {
       this.append(turn, k, rate);
       turn.psi = turn.psiAll;
       this.open = turn;
+      if (this.pending && this.pending.cutS === Infinity) {
+        this.pending.cutS = r.s[k]! - r.ds[k]!;
+      }
     }
   }
 
   /** An ended turn: GPS turns wait for their run-out, the rest are measured now. */
   private end(turn: OpenTurn) {
+    // Too small to be a turn (receiver noise, a lane change): gone, and no bound on run-ins;
+    // the turn before it goes on collecting its run-out.
+    if (Math.abs(turn.psi) < this.o.minHeadingChange) {
+      if (this.pending) this.pending.cutS = Infinity;
+      return;
+    }
     // Output stays in order: the turn before this one is measured first.
     this.settlePending();
-    // Too small to be a turn (receiver noise, a lane change): gone, and no bound on run-ins.
-    if (Math.abs(turn.psi) < this.o.minHeadingChange) return;
     const lastS = turn.s[turn.activeLen - 1]!;
     // The next turn's run-in starts after this one.
     this.history.floor = lastS;
+    this.fixHistory.floor = lastS;
     if (turn.course.s.length === 0) return this.close(turn);
     const lastT = turn.t[turn.activeLen - 1]!;
     this.pending = {
       turn,
       // Course points sit half a chord behind the machine: run on that far again.
       untilS: lastS + this.o.gpsBaseline * (FIT_MARGIN + 0.5),
-      untilT: lastT + this.o.maxGap,
+      fixesUntilS: lastS + FIX_MARGIN,
+      fixesUntil: turn.fixes.x.length + FIX_MARGIN_COUNT,
+      untilT: lastT + RUN_OUT_WAIT,
+      cutS: Infinity,
     };
   }
 
@@ -644,14 +780,22 @@ class Segmenter implements TTurnSegmenter {
     const p = this.pending;
     if (!p) return;
     const r = this.ring;
-    addCoursePoint(p.turn.course, r, k);
-    if (r.s[k]! >= p.untilS || r.t[k]! >= p.untilT) this.settlePending();
+    const s = r.s[k]!;
+    if (s - r.ds[k]! < p.untilS) addCoursePoint(p.turn.course, r, k);
+    addFix(p.turn.fixes, r, k);
+    const fixesDone = s >= p.fixesUntilS && p.turn.fixes.x.length >= p.fixesUntil;
+    if ((s >= p.untilS && fixesDone) || r.t[k]! >= p.untilT) this.settlePending();
   }
 
   private settlePending() {
     const p = this.pending;
     if (!p) return;
     this.pending = undefined;
+    // A turn under way (or undecided) when the run-out ends: its fixes are not run-out.
+    const f = p.turn.fixes;
+    let n = f.s.length;
+    while (n > 0 && f.s[n - 1]! > p.cutS) n--;
+    f.x.length = f.y.length = f.s.length = f.t.length = f.run.length = n;
     this.close(p.turn);
   }
 
@@ -678,7 +822,13 @@ class Segmenter implements TTurnSegmenter {
     let start = turn.t[first]! - turn.dt[first]!;
     let end = turn.t[last]!;
     let headingChange = Math.abs(psi);
-    const arc = this.fitGpsArc(turn, turn.s[first]! - turn.ds[first]!, turn.s[last]!, psi);
+    const arc = this.fitGpsArc(
+      turn,
+      turn.s[first]! - turn.ds[first]!,
+      turn.s[last]!,
+      psi,
+      distRev > dist / 2,
+    );
     if (arc) {
       ({ start, end, headingChange } = arc);
       dist = arc.distance;
@@ -708,7 +858,13 @@ class Segmenter implements TTurnSegmenter {
    * taken from a course that trails the machine by half a baseline, seeds the fit. Undefined
    * when the turn has no run-in or run-out to fit against, or the fit disagrees with the sum.
    */
-  private fitGpsArc(turn: OpenTurn, coreStart: number, coreEnd: number, psiSum: number) {
+  private fitGpsArc(
+    turn: OpenTurn,
+    coreStart: number,
+    coreEnd: number,
+    psiSum: number,
+    reverse: boolean,
+  ) {
     const c = turn.course;
     const n = c.s.length;
     if (n === 0) return undefined;
@@ -716,12 +872,25 @@ class Segmenter implements TTurnSegmenter {
     const a0 = coreStart - lag;
     const b0 = coreEnd - lag;
     const reach = Math.max(this.o.gpsBaseline, 0.3 * (b0 - a0));
-    const fit = fitHeadingRamp({ ...c, length: n }, { a: a0, b: b0, reach });
+    // The fit to the positions starts from the detector's core (heading change summed over the
+    // turn, arc between the half-plateau crossings); the heading fit is the fallback, and a
+    // better start when the core is too far off for the fit to the positions to be trusted.
+    const psi0 = interpolate(c.s, c.psi, a0);
+    const fromCore = fitArcToFixes(
+      turn.fixes,
+      { a: a0, b: b0, psi0, psi1: psi0 + psiSum },
+      reverse,
+    );
+    if (fromCore) return fromCore;
+    const ramp = fitHeadingRamp({ ...c, length: n }, { a: a0, b: b0, reach });
+    const dPsi = ramp ? ramp.psi1 - ramp.psi0 : 0;
+    const fit =
+      ramp && Math.sign(dPsi) === Math.sign(psiSum) && Math.abs(dPsi) >= this.o.minHeadingChange
+        ? ramp
+        : undefined;
     if (!fit) return undefined;
-    const dPsi = fit.psi1 - fit.psi0;
-    if (Math.sign(dPsi) !== Math.sign(psiSum) || Math.abs(dPsi) < this.o.minHeadingChange) {
-      return undefined;
-    }
+    const onPositions = fitArcToFixes(turn.fixes, fit, reverse);
+    if (onPositions) return onPositions;
     return {
       start: interpolate(c.s, c.t, fit.a),
       end: interpolate(c.s, c.t, fit.b),
@@ -729,17 +898,6 @@ class Segmenter implements TTurnSegmenter {
       distance: fit.b - fit.a,
     };
   }
-}
-
-/** y at x on the polyline (xs ascending, at least one point), straight on past either end. */
-function interpolate(xs: readonly number[], ys: readonly number[], x: number): number {
-  const n = xs.length;
-  if (n === 1) return ys[0]!;
-  let i = 1;
-  while (i < n - 1 && xs[i]! < x) i++;
-  const x0 = xs[i - 1]!;
-  const x1 = xs[i]!;
-  return x1 > x0 ? ys[i - 1]! + ((ys[i]! - ys[i - 1]!) * (x - x0)) / (x1 - x0) : ys[i]!;
 }
 
 /** Detects the turns in a whole log held in memory. */

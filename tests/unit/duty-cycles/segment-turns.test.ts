@@ -17,6 +17,7 @@ import {
 const WHEELBASE = 2.8;
 
 type TGeoPoint = { latitude: number; longitude: number };
+type TDetected = ReturnType<typeof segmentTurns>[number];
 /** geolib's path length with Vincenty distances to the millimetre (its default rounds to 1 m). */
 const geolibLength = (points: TGeoPoint[]) =>
   getPathLength(points, (a, b) => getPreciseDistance(a as TGeoPoint, b as TGeoPoint, 0.001));
@@ -100,6 +101,31 @@ describe("segmentTurns on generated paths with known turns", () => {
       expect(u.distance).toBeLessThan(22);
     });
   }
+
+  it("reads both arcs of an S-bend with 10 m between them from GPS positions alone", () => {
+    // Each turn's fit keeps to its own fixes: the run-out of the first stops where the second
+    // begins, the run-in of the second starts where the first ended. Known answers: the
+    // generated arcs (90° of 8 m left, 120° of 12 m right).
+    const legs: TPathLeg[] = [
+      { kind: "straight", distance: 30, speed: 2 },
+      { kind: "arc", radius: 8, headingChange: 90, speed: 2 },
+      { kind: "straight", distance: 10, speed: 2 },
+      { kind: "arc", radius: 12, headingChange: -120, speed: 2 },
+      { kind: "straight", distance: 30, speed: 2 },
+    ];
+    for (const hz of [5, 10]) {
+      for (const seed of [3, 4]) {
+        const path = samplePath({ legs, hz, noise: { position: 0.05, speed: 0.05 }, seed });
+        const turns = segmentTurns(only(path, bySource["GPS positions"]));
+        expect(turns.map((t) => t.direction)).toEqual(["left", "right"]);
+        const [a, b] = turns as [TDetected, TDetected];
+        expect(Math.abs(a.radius - 8) / 8).toBeLessThan(0.05);
+        expect(Math.abs(a.headingChange - 90)).toBeLessThan(5);
+        expect(Math.abs(b.radius - 12) / 12).toBeLessThan(0.05);
+        expect(Math.abs(b.headingChange - 120)).toBeLessThan(5);
+      }
+    }
+  });
 
   it("turn distance matches geolib's haversine length of the same stretch of GPS track", () => {
     const path = samplePath({ legs: uTurnField, seed: 3 });
