@@ -181,7 +181,10 @@ function SweepBody({
             </thead>
             <tbody className="divide-y divide-ink-100">
               {r.points.map((p, i) => {
-                const why = p.warnings.find((w) => w.severity === "error");
+                // The declared limits say most plainly why a value is out; then the engine's.
+                const why =
+                  p.warnings.find((w) => w.code === "outside-limits") ??
+                  p.warnings.find((w) => w.severity === "error");
                 return (
                   <tr key={i} className={p.feasible ? undefined : "bg-danger-50"}>
                     <th scope="row" className="px-3 py-2 text-left font-medium">
