@@ -8,3 +8,4 @@ export {
   sweepOptions,
 } from "./api/studies";
 export { StudiesTable } from "./components/studies-table";
+export { describeChange, PARAMETER_LABELS, parameterUnit } from "./lib/setup-choices";

@@ -13,3 +13,6 @@ export type {
 } from "./schemas/study";
 export { ZComparisonCreate, ZSweepCreate, ZStudyListQuery } from "./schemas/study";
 export { readComparison, readSweep } from "./server/read-study";
+export { readSetupBase, type TSetupBase } from "./server/read-setup-base";
+// Plain words for an option's changes and the swept settings, for reports and other pages.
+export { describeChange, PARAMETER_LABELS, parameterUnit } from "./lib/setup-choices";

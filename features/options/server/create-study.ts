@@ -9,6 +9,7 @@ import { can } from "@/lib/authz/policy";
 import { assertMayRun } from "./access";
 import { ApiError, parseOrThrow } from "@/features/platform";
 import { runStudy, type TStudyInputs } from "./run-study";
+import { PARAMETER_LABELS } from "../lib/setup-choices";
 
 /**
  * Runs a comparison or sweep against an estimate's frozen machine and duty cycle and stores
@@ -78,5 +79,5 @@ export async function createStudy({
 function defaultTitle(machineName: string, inputs: TStudyInputs): string {
   return inputs.kind === "comparison"
     ? `${machineName}: other setups`
-    : `${machineName}: ${inputs.sweep.parameter} sweep`;
+    : `${machineName}: ${PARAMETER_LABELS[inputs.sweep.parameter].toLowerCase()} swept`;
 }
