@@ -89,7 +89,7 @@ describe("options journey", () => {
     // 4. Sweep the front track from the comparison.
     await page.getByRole("link", { name: "Sweep a setting" }).click();
     await page.waitForURL(`${baseUrl}/estimates/${estimateId}/sweep`);
-    await page.getByLabel("Setting").selectOption("frontTrack");
+    await page.getByLabel("Setting", { exact: true }).selectOption("frontTrack");
     await page.getByLabel(/^From/).fill("1.6");
     await page.getByLabel(/^To/).fill("2.2");
     await page.getByLabel("Points").fill("13");
