@@ -30,12 +30,13 @@ function deeperTread(m: TMachine): TOptionSpec {
       },
     };
   });
-  const fitted = (["front", "rear"] as const).reduce(
-    (sum, axle) => sum + 2 * Math.round(m.axles[axle].tyre.price * 1.2),
+  // Fitted at the next change: the one-off cost is the extra over a standard set of four.
+  const extra = (["front", "rear"] as const).reduce(
+    (sum, axle) =>
+      sum + 2 * (Math.round(m.axles[axle].tyre.price * 1.2) - m.axles[axle].tyre.price),
     0,
   );
-  // Fitted early, so the worn-in set is sold on at about a third of its price (invented).
-  return { name: "Deeper-tread tyres", changes, oneOffCost: Math.round(fitted * 0.35) };
+  return { name: "Deeper-tread tyres", changes, oneOffCost: extra };
 }
 
 const param = (
@@ -46,13 +47,13 @@ const param = (
 /** The layout-specific proposal the dealership's fitters would make for each demo machine. */
 function layoutOption(demoId: string, m: TMachine): TOptionSpec | null {
   switch (demoId) {
-    case "row-crop-tractor": {
-      // Arms re-set so their lines meet near the rear axle centre: the classic trapezoid
-      // rule of thumb for Ackermann (common practice, no source).
-      const pivot = m.axles.front.pivotTrack ?? m.axles.front.track;
-      const angle = (Math.atan(pivot / 2 / m.wheelbase) * 180) / Math.PI;
-      return { name: "Re-set steering arms", changes: [param("armAngle", angle)], oneOffCost: 480 };
-    }
+    case "row-crop-tractor":
+      // Less lead, and the operators leave the assist off through headland turns.
+      return {
+        name: "Less lead, assist off in turns",
+        changes: [param("lead", 1), { kind: "front-assist-in-turns", engaged: false }],
+        oneOffCost: 350,
+      };
     case "articulated-loader":
       // A different frame on the next machine: the price difference the customer would pay.
       return {

@@ -26,7 +26,9 @@ import type { TComparisonDto } from "@/features/options/schemas/study";
 import { describeChange } from "@/features/options/lib/setup-choices";
 import { GroupedBarChart, PaybackChart } from "@/features/options/components/option-charts";
 
-const hoursText = (h: number | null) => (h === null ? "never" : `${formatNumber(h, 0)} h`);
+/** Hours in words; a payback beyond any tyre's working life reads as such, not as 5,253,139 h. */
+const hoursText = (h: number | null) =>
+  h === null ? "never" : h > 100_000 ? "over 100,000 h" : `${formatNumber(h, 0)} h`;
 
 /** A stored comparison: options beside today's setup, per position, charts, reasons, cautions. */
 export function ComparisonView({
@@ -214,16 +216,16 @@ function ComparisonBody({
                     <th scope="col" className="px-3 py-2">
                       Tyre
                     </th>
-                    <th scope="col" className="px-3 py-2 text-right">
+                    <th scope="col" className="whitespace-nowrap px-3 py-2 text-right">
                       Wear ({wearUnit}/100 h)
                     </th>
-                    <th scope="col" className="px-3 py-2 text-right">
+                    <th scope="col" className="whitespace-nowrap px-3 py-2 text-right">
                       Load
                     </th>
-                    <th scope="col" className="px-3 py-2 text-right">
+                    <th scope="col" className="whitespace-nowrap px-3 py-2 text-right">
                       Life
                     </th>
-                    <th scope="col" className="px-3 py-2 text-right">
+                    <th scope="col" className="whitespace-nowrap px-3 py-2 text-right">
                       Per hour ({currency})
                     </th>
                   </tr>
@@ -238,20 +240,24 @@ function ComparisonBody({
                           {o.name}
                         </th>
                         <td className="px-3 py-2">{p.designation}</td>
-                        <td className="px-3 py-2 text-right">
+                        <td className="whitespace-nowrap px-3 py-2 text-right">
                           {wear(p.wearPer100h.total).toFixed(wearDigits)}
                         </td>
                         <td
                           className={
                             p.loadRatio > 1
-                              ? "px-3 py-2 text-right font-medium text-danger-700"
-                              : "px-3 py-2 text-right"
+                              ? "whitespace-nowrap px-3 py-2 text-right font-medium text-danger-700"
+                              : "whitespace-nowrap px-3 py-2 text-right"
                           }
                         >
                           {Math.round(p.loadRatio * 100)} % of rated
                         </td>
-                        <td className="px-3 py-2 text-right">{hoursText(p.hoursToReplacement)}</td>
-                        <td className="px-3 py-2 text-right">{money(p.costPerHour)}</td>
+                        <td className="whitespace-nowrap px-3 py-2 text-right">
+                          {hoursText(p.hoursToReplacement)}
+                        </td>
+                        <td className="whitespace-nowrap px-3 py-2 text-right">
+                          {money(p.costPerHour)}
+                        </td>
                       </tr>
                     );
                   })}

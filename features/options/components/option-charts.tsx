@@ -302,8 +302,11 @@ export function SweepChart({
   yLabel,
   formatX,
   formatY,
+  unit,
 }: {
   title: string;
+  /** Unit of the swept value, for the legend ("" for pure numbers). */
+  unit: string;
   points: { x: number; y: number | null; feasible: boolean }[];
   current: { x: number; y: number };
   best: { x: number; y: number } | null;
@@ -322,8 +325,12 @@ export function SweepChart({
     range: [M.left, W - M.right],
     nice: true,
   });
+  // Around the values, not from zero: a sweep is read for where the curve dips.
+  const lo = Math.min(...ys);
+  const hi = Math.max(...ys);
+  const pad = Math.max((hi - lo) * 0.15, Math.abs(hi) * 0.01, 1e-6);
   const y = scaleLinear({
-    domain: [0, Math.max(1e-9, ...ys) * 1.1],
+    domain: [Math.max(0, lo - pad), hi + pad],
     range: [H - M.bottom, M.top],
     nice: true,
   });
@@ -408,6 +415,7 @@ export function SweepChart({
             <line x1="7" x2="7" y1="0" y2="12" strokeDasharray="3 2" className="stroke-ink-500" />
           </svg>
           Today: {formatX(current.x)}
+          {unit && unit !== "°" ? ` ${unit}` : unit}
         </span>
         {best ? (
           <span className="flex items-center gap-1">
@@ -415,6 +423,7 @@ export function SweepChart({
               <circle cx="6" cy="6" r="5" className="fill-ok-700" />
             </svg>
             Best within limits: {formatX(best.x)}
+            {unit && unit !== "°" ? ` ${unit}` : unit}
           </span>
         ) : (
           <span>No setting within limits</span>

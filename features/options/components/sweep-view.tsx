@@ -57,7 +57,7 @@ function SweepBody({
   const label = PARAMETER_LABELS[r.parameter];
   const unit = parameterUnit(system, r.parameter);
   const shown = (v: number) => parameterFromSi(system, r.parameter, v);
-  const fmtX = (v: number) => `${formatNumber(v, 3)}${unit ? ` ${unit}` : ""}`;
+  const fmtX = (v: number) => `${formatNumber(v, 3)}${unit === "°" ? "°" : unit ? ` ${unit}` : ""}`;
   const money = (v: number | null) => formatMoney(v, currency);
   const usable = r.points.filter((p) => p.feasible).length;
 
@@ -129,7 +129,8 @@ function SweepBody({
           </dd>
           <dd className="text-sm text-ink-700">
             {r.best
-              ? `${money(r.best.costPerHour)} per hour, ${money(r.current.costPerHour - r.best.costPerHour)} less than today`
+              ? // Per 1,000 h: a saving of a fraction of a penny per hour still reads as money.
+                `${money(r.best.costPerHour)} per hour; ${money((r.current.costPerHour - r.best.costPerHour) * 1000)} less than today per 1,000 operating hours`
               : "No value in the range is usable."}
           </dd>
         </div>
@@ -152,6 +153,7 @@ function SweepBody({
           current={{ x: shown(r.current.value), y: r.current.costPerHour }}
           best={r.best ? { x: shown(r.best.value), y: r.best.costPerHour } : null}
           xLabel={`${label}${unit ? ` (${unit})` : ""}`}
+          unit={unit}
           yLabel={`${currencySymbol(currency)} per hour`}
           formatX={(v) => formatNumber(v, 2)}
           formatY={(v) => money(v)}

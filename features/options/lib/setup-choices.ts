@@ -398,7 +398,8 @@ export function describeChange(change: TMachineChange, system: TUnitSystem): str
       const unit = parameterUnit(system, change.parameter);
       const v = parameterFromSi(system, change.parameter, change.value);
       const axle = change.axle ? ` (${change.axle} axle)` : "";
-      return `${PARAMETER_LABELS[change.parameter]}${axle} ${v.toLocaleString("en-GB", { maximumFractionDigits: 3 })}${unit ? ` ${unit}` : ""}`;
+      const sep = unit === "°" || unit === "" ? "" : " ";
+      return `${PARAMETER_LABELS[change.parameter]}${axle} ${v.toLocaleString("en-GB", { maximumFractionDigits: 3 })}${sep}${unit}`;
     }
     case "inflation":
       return `${AXLE_WORD[change.axle]} pressure ${q("pressure-kpa", change.pressure, 0)}, rated load ${q("mass-kg", change.ratedLoad, 0)} per tyre`;

@@ -31,9 +31,9 @@ export default async function SweepSettingPage({ params }: { params: Promise<{ i
           {base.machineName} on{" "}
           <Link href={`/estimates/${id}`} className="text-furrow-700 hover:underline">
             {base.estimateTitle}
-          </Link>{" "}
-          ({base.dutyCycleName}); today {formatMoney(base.costPerHour, actor.currency)} per
-          operating hour. The engine prices the duty cycle at each value of one setting.
+          </Link>
+          ; today {formatMoney(base.costPerHour, actor.currency)} per operating hour. The engine
+          prices the duty cycle at each value of one setting.
         </p>
       </div>
       <SweepForm estimateId={id} machine={base.machine} system={actor.unitSystem} />

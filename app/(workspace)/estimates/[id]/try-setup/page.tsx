@@ -31,10 +31,10 @@ export default async function TrySetupPage({ params }: { params: Promise<{ id: s
           {base.machineName} on{" "}
           <Link href={`/estimates/${id}`} className="text-furrow-700 hover:underline">
             {base.estimateTitle}
-          </Link>{" "}
-          ({base.dutyCycleName}); today {formatMoney(base.costPerHour, actor.currency)} per
-          operating hour. Each option is one or more changes to today&apos;s machine; only changes
-          that fit its steering and drive are offered. To chart one setting over a range instead,{" "}
+          </Link>
+          ; today {formatMoney(base.costPerHour, actor.currency)} per operating hour. Each option is
+          one or more changes to today&apos;s machine; only changes that fit its steering and drive
+          are offered. To chart one setting over a range instead,{" "}
           <Link href={`/estimates/${id}/sweep`} className="text-furrow-700 hover:underline">
             sweep a setting
           </Link>
