@@ -7,6 +7,7 @@ import { seedDutyCycles } from "@/scripts/seed/duty-cycles";
 import { seedBilling, seedBillingPlans } from "@/scripts/seed/billing";
 import { seedReportBranding } from "@/scripts/seed/reports";
 import { seedReadings } from "@/scripts/seed/readings";
+import { seedOptions } from "@/scripts/seed/options";
 
 const db = getDb();
 // Plans first: a new dealership starts its trial from them.
@@ -33,4 +34,9 @@ await seedReportBranding(db, [tenancy.dealership, tenancy.rival]);
 console.log("[seed] report branding ready");
 const readings = await seedReadings(db, { dealership: tenancy.dealership });
 console.log(`[seed] tread readings: ${readings.added} new`);
+const options = await seedOptions(db, {
+  dealership: tenancy.dealership,
+  adminEmail: "admin@brackenridge.test",
+});
+console.log(`[seed] comparisons: ${options.added} new`);
 await getPool().end();

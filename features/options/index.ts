@@ -15,3 +15,6 @@ export type {
 export { ZComparisonCreate, ZSweepCreate, ZStudyListQuery } from "./schemas/study";
 export { readComparison, readSweep } from "./server/read-study";
 export { readComparisonSource } from "./server/read-comparison-source";
+export { readSetupBase, type TSetupBase } from "./server/read-setup-base";
+// Plain words for an option's changes and the swept settings, for reports and other pages.
+export { describeChange, PARAMETER_LABELS, parameterUnit } from "./lib/setup-choices";

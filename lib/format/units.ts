@@ -1,14 +1,18 @@
 /**
  * Display units. The engine and the API work in SI (m, mm, kg); a user who prefers imperial
  * sees inches, feet and pounds. Factors are exact by definition (NIST SP 811, Appendix B:
- * 1 in = 0.0254 m, 1 ft = 0.3048 m, 1 lb = 0.45359237 kg).
+ * 1 in = 0.0254 m, 1 ft = 0.3048 m, 1 lb = 0.45359237 kg); inflation pressure shows in psi
+ * (NIST SP 811, Appendix B: 1 psi = 6.894 757 kPa, from the exact pound-force and inch).
  */
 export type TUnitSystem = "metric" | "imperial";
-export type TQuantity = "length-m" | "length-mm" | "mass-kg" | "distance-m" | "none";
+export type TQuantity =
+  "length-m" | "length-mm" | "mass-kg" | "distance-m" | "pressure-kpa" | "none";
 
 const M_PER_IN = 0.0254;
 const M_PER_FT = 0.3048;
 const KG_PER_LB = 0.45359237;
+// 1 lbf = 0.45359237 kg × 9.80665 m/s² (exact); 1 psi = 1 lbf/in².
+const KPA_PER_PSI = (KG_PER_LB * 9.80665) / (M_PER_IN * M_PER_IN) / 1000;
 
 type TUnitDef = { label: string; fromSi: (v: number) => number; toSi: (v: number) => number };
 
@@ -20,6 +24,7 @@ const UNITS: Record<TUnitSystem, Record<TQuantity, TUnitDef>> = {
     "length-mm": { label: "mm", fromSi: identity, toSi: identity },
     "mass-kg": { label: "kg", fromSi: identity, toSi: identity },
     "distance-m": { label: "m", fromSi: identity, toSi: identity },
+    "pressure-kpa": { label: "kPa", fromSi: identity, toSi: identity },
     none: { label: "", fromSi: identity, toSi: identity },
   },
   imperial: {
@@ -33,6 +38,7 @@ const UNITS: Record<TUnitSystem, Record<TQuantity, TUnitDef>> = {
     "mass-kg": { label: "lb", fromSi: (v) => v / KG_PER_LB, toSi: (v) => v * KG_PER_LB },
     // Turning circles and paths in feet.
     "distance-m": { label: "ft", fromSi: (v) => v / M_PER_FT, toSi: (v) => v * M_PER_FT },
+    "pressure-kpa": { label: "psi", fromSi: (v) => v / KPA_PER_PSI, toSi: (v) => v * KPA_PER_PSI },
     none: { label: "", fromSi: identity, toSi: identity },
   },
 };

@@ -102,6 +102,14 @@ export function EstimateResult({
           ) : null}
         </div>
         <div className="flex flex-wrap gap-2">
+          {canWrite ? (
+            <Link
+              href={`/estimates/${e.id}/try-setup`}
+              className="inline-flex h-9 items-center rounded-md border border-ink-300 bg-white px-3 text-sm font-medium text-ink-800 hover:bg-ink-100"
+            >
+              Try another setup
+            </Link>
+          ) : null}
           <a
             href={`/api/v1/estimates/${e.id}/csv`}
             download

@@ -30,6 +30,13 @@ export const ZStudyListQuery = z.object({
   machineId: z.uuid().optional(),
   customerId: z.uuid().optional(),
   estimateId: z.uuid().optional(),
+  /** Text the title contains (the list's search box). */
+  q: z
+    .string()
+    .trim()
+    .max(100, "Search text must be at most 100 characters.")
+    .optional()
+    .transform((v) => (v ? v : undefined)),
 });
 
 /** A stored study as lists show it. */

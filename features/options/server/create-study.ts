@@ -10,6 +10,7 @@ import { assertMayRun } from "./access";
 import { ApiError, parseOrThrow } from "@/features/platform";
 import type { TReportCalibration } from "@/lib/reports/calibration-note";
 import { runStudy, type TStudyInputs } from "./run-study";
+import { PARAMETER_LABELS } from "../lib/setup-choices";
 
 /**
  * Runs a comparison or sweep against an estimate's frozen machine and duty cycle and stores
@@ -84,5 +85,5 @@ export async function createStudy({
 function defaultTitle(machineName: string, inputs: TStudyInputs): string {
   return inputs.kind === "comparison"
     ? `${machineName}: other setups`
-    : `${machineName}: ${inputs.sweep.parameter} sweep`;
+    : `${machineName}: ${PARAMETER_LABELS[inputs.sweep.parameter].toLowerCase()} swept`;
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq, sql, type SQL } from "drizzle-orm";
+import { and, desc, eq, ilike, sql, type SQL } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { optionStudies } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
@@ -10,10 +10,13 @@ import {
   type TStudyPage,
   type TStudyRow,
 } from "../schemas/study";
-import { notFound, parseOrThrow, toPage } from "@/features/platform";
+import { likePattern, notFound, parseOrThrow, toPage } from "@/features/platform";
 import { toStudyRow } from "./study-dto";
 
-/** Newest first, narrowed to a machine, customer or estimate; a customer sees only their own. */
+/**
+ * Newest first, narrowed to a machine, customer or estimate and by title text; a customer sees
+ * only their own.
+ */
 export async function listStudies({
   db,
   actor,
@@ -35,6 +38,7 @@ export async function listStudies({
     q.machineId ? eq(optionStudies.machineId, q.machineId) : undefined,
     q.customerId ? eq(optionStudies.customerId, q.customerId) : undefined,
     q.estimateId ? eq(optionStudies.estimateId, q.estimateId) : undefined,
+    q.q ? ilike(optionStudies.title, likePattern(q.q)) : undefined,
   ];
   const where = and(...filters);
   const [rows, [count]] = await Promise.all([

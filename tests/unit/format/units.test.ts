@@ -14,6 +14,15 @@ describe("display units", () => {
     expect(toSi("imperial", "mass-kg", 1000)).toBeCloseTo(453.59237, 9);
   });
 
+  it("converts inflation pressure to psi (NIST SP 811, B.8: 1 psi = 6.894 757 E+03 Pa)", () => {
+    expect(toSi("imperial", "pressure-kpa", 1)).toBeCloseTo(6.894757, 6);
+    expect(fromSi("imperial", "pressure-kpa", 160)).toBeCloseTo(23.206, 3);
+    expect([unitLabel("metric", "pressure-kpa"), unitLabel("imperial", "pressure-kpa")]).toEqual([
+      "kPa",
+      "psi",
+    ]);
+  });
+
   it("leaves metric values and unit-less quantities alone", () => {
     expect(fromSi("metric", "length-m", 2.7)).toBe(2.7);
     expect(toSi("imperial", "none", 52)).toBe(52);

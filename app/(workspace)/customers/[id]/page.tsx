@@ -6,6 +6,7 @@ import { prefetchCustomer } from "@/features/customers/server/prefetch-customers
 import { isUuid } from "@/features/platform/server/found";
 import { MachinesTable } from "@/features/machines/components/machines-table";
 import { EstimatesTable } from "@/features/estimates/components/estimates-table";
+import { StudiesTable } from "@/features/options/components/studies-table";
 import { Card } from "@/lib/ui/card";
 import { can } from "@/lib/authz/policy";
 import { makeQueryClient } from "@/lib/query/query-client";
@@ -35,6 +36,17 @@ export default async function CustomerPage({ params }: { params: Promise<{ id: s
               pageSize={10}
             />
           </Card>
+        ) : null}
+        {/* Comparisons and sweeps are working material too; customers see them in reports. */}
+        {can(actor, "estimate:read") ? (
+          <>
+            <Card title="Other setups compared">
+              <StudiesTable kind="comparison" currency={actor.currency} customerId={id} />
+            </Card>
+            <Card title="Settings swept">
+              <StudiesTable kind="sweep" currency={actor.currency} customerId={id} />
+            </Card>
+          </>
         ) : null}
       </CustomerDetail>
     </HydrationBoundary>

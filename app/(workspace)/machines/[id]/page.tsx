@@ -8,6 +8,7 @@ import { listCustomerChoices } from "@/features/customers/server/list-customer-c
 import { prefetchMachine } from "@/features/machines/server/prefetch-machines";
 import { isUuid } from "@/features/platform/server/found";
 import { EstimatesTable } from "@/features/estimates/components/estimates-table";
+import { StudiesTable } from "@/features/options/components/studies-table";
 import { can } from "@/lib/authz/policy";
 import { Card } from "@/lib/ui/card";
 import { makeQueryClient } from "@/lib/query/query-client";
@@ -46,6 +47,16 @@ export default async function MachinePage({ params }: { params: Promise<{ id: st
               pageSize={10}
             />
           </Card>
+        ) : null}
+        {can(actor, "estimate:read") ? (
+          <>
+            <Card title="Other setups compared">
+              <StudiesTable kind="comparison" currency={actor.currency} machineId={id} />
+            </Card>
+            <Card title="Settings swept">
+              <StudiesTable kind="sweep" currency={actor.currency} machineId={id} />
+            </Card>
+          </>
         ) : null}
       </MachineDetail>
     </HydrationBoundary>
