@@ -204,7 +204,7 @@ export function ServerDataTable<T>({
                 <th
                   key={h.id}
                   scope="col"
-                  className="whitespace-nowrap px-3 py-2"
+                  className="px-3 py-2 align-bottom"
                   aria-sort={
                     active ? (state.dir === "asc" ? "ascending" : "descending") : undefined
                   }
@@ -237,7 +237,8 @@ export function ServerDataTable<T>({
             table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="hover:bg-furrow-50">
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="whitespace-nowrap px-3 py-2 text-ink-800">
+                  // Cells wrap so the table fits its card on a laptop screen; phones scroll the box.
+                  <td key={cell.id} className="px-3 py-2 align-top text-ink-800">
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}

@@ -101,7 +101,14 @@ export function EstimatesTable({
           title="No estimates yet"
           action={
             canRun ? (
-              <Link href="/estimates/new" className="font-medium text-furrow-700 underline">
+              <Link
+                href={`/estimates/new${
+                  customerId || machineId
+                    ? `?${new URLSearchParams({ ...(customerId ? { customerId } : {}), ...(machineId ? { machineId } : {}) })}`
+                    : ""
+                }`}
+                className="font-medium text-furrow-700 underline"
+              >
                 Run an estimate
               </Link>
             ) : undefined
