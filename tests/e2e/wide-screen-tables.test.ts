@@ -13,7 +13,8 @@ async function overflowingTables(page: Page): Promise<TOverflow[]> {
   return page.evaluate(() => {
     const out: TOverflow[] = [];
     for (const table of Array.from(document.querySelectorAll("table"))) {
-      if (!table.getClientRects().length) continue; // hidden (closed panel)
+      // Hidden (a closed panel) or for screen readers only (a chart's figures): not on screen.
+      if (!table.getClientRects().length || table.closest(".sr-only")) continue;
       let box: HTMLElement | null = table.parentElement;
       while (box && getComputedStyle(box).overflowX === "visible") box = box.parentElement;
       const card = table.closest("section") ?? document.querySelector("main")!;
