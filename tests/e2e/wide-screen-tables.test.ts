@@ -30,6 +30,24 @@ async function overflowingTables(page: Page): Promise<TOverflow[]> {
   });
 }
 
+/** Charts whose drawing reaches past their figure, or that must be scrolled to be read. */
+async function clippedCharts(page: Page): Promise<string[]> {
+  return page.evaluate(() => {
+    const out: string[] = [];
+    for (const figure of Array.from(document.querySelectorAll("figure"))) {
+      const name = figure.querySelector("figcaption")?.textContent ?? "chart";
+      const right = figure.getBoundingClientRect().right;
+      for (const svg of Array.from(figure.querySelectorAll("svg")))
+        if (svg.getBoundingClientRect().right > right + 1)
+          out.push(`${name}: drawing past the edge`);
+      for (const box of Array.from(figure.querySelectorAll<HTMLElement>("div")))
+        if (!box.closest(".sr-only") && box.scrollWidth > box.clientWidth + 1)
+          out.push(`${name}: scrolls sideways`);
+    }
+    return out;
+  });
+}
+
 describe("tables on laptop screens", () => {
   let browser: Browser;
   let paths: string[] = [];
@@ -53,6 +71,7 @@ describe("tables on laptop screens", () => {
       "/machines/templates",
       "/estimates",
       "/duty-cycles",
+      "/duty-cycles/build",
       "/reports",
       "/tyre-plan",
       "/audit",
@@ -70,7 +89,7 @@ describe("tables on laptop screens", () => {
   });
 
   for (const width of [1280, 1366]) {
-    it(`every table fits its card at ${width} px wide`, async () => {
+    it(`every table and chart fits its card at ${width} px wide`, async () => {
       const context = await browser.newContext({ viewport: { width, height: 900 } });
       const page = await context.newPage();
       await signIn(page, "admin@brackenridge.test");
@@ -80,6 +99,7 @@ describe("tables on laptop screens", () => {
         await page.waitForLoadState("networkidle");
         tables += await page.locator("table").count();
         expect(await overflowingTables(page), `${path} at ${width} px`).toEqual([]);
+        expect(await clippedCharts(page), `${path} charts at ${width} px`).toEqual([]);
         const pageOverflow = await page.evaluate(
           () => document.documentElement.scrollWidth - window.innerWidth,
         );

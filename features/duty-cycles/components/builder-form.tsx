@@ -139,18 +139,21 @@ function BlockEditor({
               scale={KMH}
               onChange={(v) => set({ turnSpeed: v })}
             />
-            <Field label="Headland turn">
-              <Select
-                value={block.headlandTurn}
-                onChange={(e) => set({ headlandTurn: e.target.value as THeadlandTurn })}
-              >
-                {HEADLAND_TURNS.map((t) => (
-                  <option key={t} value={t}>
-                    {HEADLAND_LABELS[t]}
-                  </option>
-                ))}
-              </Select>
-            </Field>
+            {/* Two columns wide: the turn names are long and must read in full. */}
+            <div className="sm:col-span-2">
+              <Field label="Headland turn">
+                <Select
+                  value={block.headlandTurn}
+                  onChange={(e) => set({ headlandTurn: e.target.value as THeadlandTurn })}
+                >
+                  {HEADLAND_TURNS.map((t) => (
+                    <option key={t} value={t}>
+                      {HEADLAND_LABELS[t]}
+                    </option>
+                  ))}
+                </Select>
+              </Field>
+            </div>
           </>
         ) : null}
         {block.kind === "yard" ? (
