@@ -64,7 +64,7 @@ export function TurnKindsTable({
         {merged > 0 ? ` (${merged} identical rows of the duty cycle merged)` : ""}, costliest first
         {infeasible > 0 ? `; ${infeasible} could not be steered that tight and add no wear` : ""}.
         {sample && common.length > 0
-          ? ` All ${common.map((c) => c.show(sample, system)).join(" · ")}.`
+          ? ` Shared by every kind: ${common.map((c) => c.show(sample, system)).join(" · ")}.`
           : ""}
         {straight.energyShare !== null && straight.energyShare >= 0.001
           ? ` Straight travel (axle wind-up) makes ${percent(straight.energyShare)} of the scrub energy.`

@@ -160,7 +160,7 @@ describe("estimate result page", () => {
     // The shared traits are said once, not repeated in every row.
     expect(headers).not.toContain("Surface");
     expect(screen.getByTestId("turn-kinds-summary").textContent).toMatch(
-      /5 identical rows of the duty cycle merged.*All Firm soil · 5\.4 km\/h · unladen/,
+      /5 identical rows of the duty cycle merged.*Shared by every kind: Firm soil · 5\.4 km\/h · unladen/,
     );
     const merged = rows.find((row) => within(row).queryByText("× 6 rows"))!;
     expect(within(merged).getByText("11.0")).toBeTruthy();
