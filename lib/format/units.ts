@@ -72,3 +72,10 @@ export function formatQuantity(
   const label = unitLabel(system, quantity);
   return `${v.toLocaleString("en-GB", { maximumFractionDigits: digits, minimumFractionDigits: 0 })}${label ? ` ${label}` : ""}`;
 }
+
+/** Speed from m/s: km/h (× 3.6) or mph (1 mph = 0.44704 m/s exactly, NIST SP 811, Appendix B). */
+export function formatSpeed(system: TUnitSystem, metresPerSecond: number, digits = 1): string {
+  if (!Number.isFinite(metresPerSecond)) return "—";
+  const v = system === "metric" ? metresPerSecond * 3.6 : metresPerSecond / 0.44704;
+  return `${v.toLocaleString("en-GB", { maximumFractionDigits: digits })} ${system === "metric" ? "km/h" : "mph"}`;
+}

@@ -31,6 +31,9 @@ export {
 
 export { minimumTurningDiameter } from "./minimum-turning-diameter";
 
+// Live checks of a machine profile being entered (the engine's lead and load checks).
+export { profileChecks, type TPartialProfile, type TProfileChecks } from "./profile-checks";
+
 // Defaults the UI may show next to user overrides.
 export { DEFAULT_SURFACES } from "./surfaces";
 export { cautionsFor, STANDING_CAUTIONS } from "./cautions";

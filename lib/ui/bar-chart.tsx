@@ -77,7 +77,13 @@ export function BarChart<T extends { label: string }>({
         <AxisBottom
           top={H - M.bottom}
           scale={x}
-          tickLabelProps={{ fontSize: 10, textAnchor: "middle" }}
+          // Long group names ("50 m and over") wrap onto a second line within their band.
+          tickLabelProps={{
+            fontSize: 10,
+            textAnchor: "middle",
+            verticalAnchor: "start",
+            width: x.step(),
+          }}
         />
         <AxisLeft
           left={M.left}

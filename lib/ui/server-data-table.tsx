@@ -37,6 +37,11 @@ type Props<T> = {
   filters?: ReactNode;
   /** Columns hidden until the user shows them. */
   initiallyHidden?: string[];
+  /**
+   * Filters the page fixes (the customer a customer page shows): never the user's filters, so
+   * an empty list then says what is missing instead of "nothing matches these filters".
+   */
+  scopeKeys?: string[];
   getRowId: (row: T) => string;
 };
 
@@ -56,6 +61,7 @@ export function ServerDataTable<T>({
   empty,
   filters,
   initiallyHidden = [],
+  scopeKeys = [],
   getRowId,
 }: Props<T>) {
   const [text, setText] = useState(state.q);
@@ -70,6 +76,14 @@ export function ServerDataTable<T>({
     // Only the debounced text should trigger this.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [debounced]);
+
+  // Back and forward change the state from the URL: the search box follows (set while
+  // rendering, React's pattern for state that tracks a prop).
+  const [seenQ, setSeenQ] = useState(state.q);
+  if (seenQ !== state.q) {
+    setSeenQ(state.q);
+    setText(state.q);
+  }
 
   const sorting: SortingState = [{ id: state.sort, desc: state.dir === "desc" }];
   const page = query.data;
@@ -94,7 +108,12 @@ export function ServerDataTable<T>({
   };
 
   const isEmpty = !!page && page.total === 0;
-  const filtered = !!state.q || Object.values(state.filters).some(Boolean);
+  const scope = Object.fromEntries(
+    Object.entries(state.filters).filter(([k]) => scopeKeys.includes(k)),
+  );
+  const filtered =
+    !!state.q ||
+    Object.entries(state.filters).some(([k, v]) => !scopeKeys.includes(k) && Boolean(v));
 
   return (
     <div aria-busy={query.isFetching || undefined}>
@@ -165,7 +184,7 @@ export function ServerDataTable<T>({
                 className="font-medium text-furrow-700 underline"
                 onClick={() => {
                   setText("");
-                  onStateChange({ ...state, q: "", filters: {}, page: 1 });
+                  onStateChange({ ...state, q: "", filters: scope, page: 1 });
                 }}
               >
                 Clear filters
@@ -185,7 +204,7 @@ export function ServerDataTable<T>({
                 <th
                   key={h.id}
                   scope="col"
-                  className="whitespace-nowrap px-3 py-2"
+                  className="px-3 py-2 align-bottom"
                   aria-sort={
                     active ? (state.dir === "asc" ? "ascending" : "descending") : undefined
                   }
@@ -218,7 +237,8 @@ export function ServerDataTable<T>({
             table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="hover:bg-furrow-50">
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="whitespace-nowrap px-3 py-2 text-ink-800">
+                  // Cells wrap so the table fits its card on a laptop screen; phones scroll the box.
+                  <td key={cell.id} className="px-3 py-2 align-top text-ink-800">
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}

@@ -104,6 +104,28 @@ describe("duty-cycle upload journey", () => {
       () => document.documentElement.scrollWidth - window.innerWidth,
     );
     expect(overflow).toBeLessThanOrEqual(0);
+
+    // After saving, the work can still be changed from the page: 60 cycles an hour instead of
+    // 40 rebuilds the turns (4 a cycle: 240 per hour) under the new name, on the same record.
+    await page.setViewportSize({ width: 1366, height: 900 });
+    const id = page.url().split("/").pop()!;
+    await page.getByRole("link", { name: "Edit the work" }).click();
+    await page.waitForURL(`${baseUrl}/duty-cycles/${id}/edit`);
+    expect(await page.getByLabel("Duty cycle name").inputValue()).toBe(name);
+    await page.getByLabel(/^Cycles per hour/).fill("60");
+    await page.getByText("240.0").first().waitFor();
+    await page.getByLabel("Duty cycle name").fill(`${name} (busy season)`);
+    await page.getByRole("button", { name: "Save changes" }).click();
+    await page.waitForURL(`${baseUrl}/duty-cycles/${id}`);
+    await page.getByRole("heading", { name: `${name} (busy season)` }).waitFor();
+    const stored = (await (
+      await page.request.get(`${baseUrl}/api/v1/duty-cycles/${id}`)
+    ).json()) as {
+      turnsPerHour: number;
+      version: number;
+    };
+    expect(stored.turnsPerHour).toBeCloseTo(240, 6);
+    expect(stored.version).toBe(2);
     expect(errors).toEqual([]);
     await page.close();
   });

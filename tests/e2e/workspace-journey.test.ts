@@ -60,10 +60,30 @@ describe("workspace journey", () => {
     await page.getByLabel(/^Name/).fill(`Thornbury 120 hp tractor ${tag}`);
     await page.getByLabel(/^Steering layout/).selectOption("trapezoid");
     await page.getByLabel(/^Steering arm angle/).fill("18");
+    // A new machine starts blank: every figure comes from the machine itself.
+    expect(await page.getByLabel(/^Wheelbase/).inputValue()).toBe("");
+    await page.getByLabel(/^Wheelbase/).fill("2.7");
+    for (const [axle, figures] of [
+      ["front", { track: "1.9", load: "2800", depth: "40", replace: "10", price: "1200" }],
+      ["rear", { track: "1.9", load: "4200", depth: "50", replace: "12", price: "2000" }],
+    ] as const) {
+      const fields = page.getByTestId(`axle-${axle}`);
+      expect(await fields.getByLabel(/^Axle load, empty/).inputValue()).toBe("");
+      await fields.getByLabel(/^Track(?! rod)/).fill(figures.track);
+      await fields.getByLabel(/^Axle load, empty/).fill(figures.load);
+      await fields.getByLabel(/^Lug depth, new/).fill(figures.depth);
+      await fields.getByLabel(/^Lug depth at replacement/).fill(figures.replace);
+      await fields.getByLabel(/^Price per tyre/).fill(figures.price);
+    }
     const sizes = page.getByLabel(/^Tyre size/);
     await sizes.nth(0).fill("380/85R24");
     await sizes.nth(1).fill("460/85R34");
     await page.getByText(/Reads as 460 mm wide/).waitFor();
+    // The lead shows live once the gear ratio is in: 1.3 on these sizes runs the front axle
+    // slower than the rear, outside the common band, and the form says so before any estimate.
+    await page.getByLabel(/^Front axle gear ratio/).fill("1.3");
+    await page.getByTestId("lead-warning").waitFor();
+    expect(await page.getByTestId("lead-check").textContent()).toMatch(/−\d\.\d %/);
     await page.getByTestId("percent-ackermann").waitFor();
     expect(await page.getByTestId("percent-ackermann").textContent()).toMatch(/^\d+ %$/);
     await page.getByRole("button", { name: "Add machine" }).click();

@@ -55,7 +55,7 @@ export default async function DutyCyclesPage() {
         ) : null}
       </header>
       <HydrationBoundary state={dehydrate(qc)}>
-        <DutyCyclesTable />
+        <DutyCyclesTable canWrite={canWrite} />
       </HydrationBoundary>
     </div>
   );

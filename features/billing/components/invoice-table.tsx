@@ -1,5 +1,6 @@
 import { DataTableShell } from "@/lib/ui/data-table-shell";
 import { formatMoney } from "@/lib/billing/money";
+import { formatDate } from "@/lib/format/format";
 import type { TInvoiceRow } from "@/features/billing/server/get-billing-overview";
 
 export function InvoiceTable({ invoices }: { invoices: TInvoiceRow[] }) {
@@ -20,9 +21,7 @@ export function InvoiceTable({ invoices }: { invoices: TInvoiceRow[] }) {
       body={invoices.map((i) => (
         <tr key={i.id} className="border-t border-ink-100">
           <td className="px-3 py-2">{i.number}</td>
-          <td className="px-3 py-2">
-            {new Date(i.createdAt).toLocaleDateString("en-GB", { timeZone: "UTC" })}
-          </td>
+          <td className="px-3 py-2">{formatDate(i.createdAt)}</td>
           <td className="px-3 py-2 text-right">{formatMoney(i.amountMinor, i.currency)}</td>
           <td className="px-3 py-2">
             {i.status === "paid" ? "Paid" : i.status === "open" ? "Unpaid" : i.status}

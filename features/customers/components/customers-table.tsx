@@ -1,12 +1,11 @@
 "use client";
 
 import Link from "next/link";
-import { useState } from "react";
 import type { ColumnDef } from "@tanstack/react-table";
 import type { TCustomerRow } from "@/features/customers/schemas/customer";
 import { useCustomers, DEFAULT_CUSTOMER_LIST } from "@/features/customers/api/customers";
-import { type TListState } from "@/lib/query/list-state";
 import { ServerDataTable } from "@/lib/ui/server-data-table";
+import { useUrlListState } from "@/lib/ui/use-url-list-state";
 import { formatDate } from "@/lib/format/format";
 import { EmptyState } from "@/lib/ui/empty-state";
 import { Select } from "@/lib/ui/input";
@@ -49,7 +48,8 @@ const columns: ColumnDef<TCustomerRow, unknown>[] = [
 ];
 
 export function CustomersTable({ canWrite }: { canWrite: boolean }) {
-  const [state, setState] = useState<TListState>(DEFAULT_CUSTOMER_LIST);
+  // Page, sort and filters live in the URL: back, forward and shared links keep the view.
+  const [state, setState] = useUrlListState(DEFAULT_CUSTOMER_LIST, { filterKeys: ["kind"] });
   const query = useCustomers(state);
   return (
     <ServerDataTable

@@ -10,6 +10,7 @@ import type {
   TDutyCycleDetail,
   TDutyCycleRow,
   TPage,
+  TUpdateDutyCycleInput,
 } from "@/features/duty-cycles/schemas/duty-cycle";
 import { apiFetch } from "@/lib/query/api-fetch";
 
@@ -77,6 +78,16 @@ export function useCreateDutyCycle() {
     mutationFn: (input: TCreateDutyCycleInput) =>
       apiFetch<TDutyCycleRow>("/api/v1/duty-cycles", { method: "POST", body: input }),
     onSuccess: () => qc.invalidateQueries({ queryKey: dutyCycleKeys.lists() }),
+  });
+}
+
+/** Renames, reassigns or (builder cycles) rebuilds a duty cycle from the version it was opened at. */
+export function useUpdateDutyCycle(id: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: TUpdateDutyCycleInput) =>
+      apiFetch<TDutyCycleRow>(`/api/v1/duty-cycles/${id}`, { method: "PATCH", body: input }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: dutyCycleKeys.all }),
   });
 }
 

@@ -21,7 +21,7 @@ import { Caution, EstimateSafetyCaution } from "@/lib/ui/caution";
 import { Field } from "@/lib/ui/field";
 import { Input, Select } from "@/lib/ui/input";
 import { toast } from "@/lib/ui/toast";
-import { useCreateDutyCycle } from "@/features/duty-cycles/api/duty-cycles";
+import { useCreateDutyCycle, useUpdateDutyCycle } from "@/features/duty-cycles/api/duty-cycles";
 import { formatShare, sharesTotal, ZBuilderInput } from "@/features/duty-cycles/schemas/builder";
 import { NameAndCustomer } from "@/features/duty-cycles/components/name-and-customer";
 import { DutyCycleSummary } from "@/features/duty-cycles/components/duty-cycle-summary";
@@ -139,18 +139,21 @@ function BlockEditor({
               scale={KMH}
               onChange={(v) => set({ turnSpeed: v })}
             />
-            <Field label="Headland turn">
-              <Select
-                value={block.headlandTurn}
-                onChange={(e) => set({ headlandTurn: e.target.value as THeadlandTurn })}
-              >
-                {HEADLAND_TURNS.map((t) => (
-                  <option key={t} value={t}>
-                    {HEADLAND_LABELS[t]}
-                  </option>
-                ))}
-              </Select>
-            </Field>
+            {/* Two columns wide: the turn names are long and must read in full. */}
+            <div className="sm:col-span-2">
+              <Field label="Headland turn">
+                <Select
+                  value={block.headlandTurn}
+                  onChange={(e) => set({ headlandTurn: e.target.value as THeadlandTurn })}
+                >
+                  {HEADLAND_TURNS.map((t) => (
+                    <option key={t} value={t}>
+                      {HEADLAND_LABELS[t]}
+                    </option>
+                  ))}
+                </Select>
+              </Field>
+            </div>
           </>
         ) : null}
         {block.kind === "yard" ? (
@@ -286,24 +289,45 @@ function BlockEditor({
   );
 }
 
-/** Builds a duty cycle from the work itself when the customer has no telematics log. */
+/** A saved builder cycle being changed: its stored inputs and the version the editor opened. */
+export type TBuilderEdit = {
+  id: string;
+  version: number;
+  name: string;
+  customerId: string;
+  builder: TBuilderInput;
+};
+
+/**
+ * Builds a duty cycle from the work itself when the customer has no telematics log; with
+ * `editing`, changes a saved builder cycle (rebuilt from the new inputs, version checked).
+ */
 export function BuilderForm({
   customers,
   initialCustomerId,
+  editing,
 }: {
   customers: { id: string; name: string }[];
   /** The customer being worked on (from the customer page), else the first. */
   initialCustomerId?: string;
+  editing?: TBuilderEdit;
 }) {
   const router = useRouter();
-  const [input, setInput] = useState<TBuilderInput>(structuredClone(BUILDER_PRESETS[0]!.input));
-  const [name, setName] = useState(BUILDER_PRESETS[0]!.name);
+  const [input, setInput] = useState<TBuilderInput>(
+    structuredClone(editing?.builder ?? BUILDER_PRESETS[0]!.input),
+  );
+  const [name, setName] = useState(editing?.name ?? BUILDER_PRESETS[0]!.name);
   const [customerId, setCustomerId] = useState(
-    customers.find((c) => c.id === initialCustomerId)?.id ?? customers[0]?.id ?? "",
+    editing?.customerId ??
+      customers.find((c) => c.id === initialCustomerId)?.id ??
+      customers[0]?.id ??
+      "",
   );
   const total = sharesTotal(input.blocks);
   const sharesOff = Math.abs(total - 1) > 0.0005;
   const create = useCreateDutyCycle();
+  const update = useUpdateDutyCycle(editing?.id ?? "");
+  const saving = editing ? update : create;
   const parsed = ZBuilderInput.safeParse(input);
   const preview = useMemo(() => {
     if (!parsed.success) return null;
@@ -327,6 +351,12 @@ export function BuilderForm({
 
   async function save() {
     try {
+      if (editing) {
+        await update.mutateAsync({ name, customerId, builder: input, version: editing.version });
+        toast.success("Duty cycle saved.");
+        router.push(`/duty-cycles/${editing.id}`);
+        return;
+      }
       const created = await create.mutateAsync({
         source: "builder",
         name,
@@ -342,28 +372,30 @@ export function BuilderForm({
 
   return (
     <div className="flex flex-col gap-5">
-      <Card title="Start from an example">
+      <Card title={editing ? "Machine" : "Start from an example"}>
         <div className="grid gap-3 sm:grid-cols-2">
-          <Field
-            label="Example"
-            hint="Invented starting points: change every figure to match the customer's work."
-          >
-            <Select
-              onChange={(e) => {
-                const p = BUILDER_PRESETS.find((x) => x.key === e.target.value);
-                if (p) {
-                  setInput(structuredClone(p.input));
-                  setName(p.name);
-                }
-              }}
+          {editing ? null : (
+            <Field
+              label="Example"
+              hint="Invented starting points: change every figure to match the customer's work."
             >
-              {BUILDER_PRESETS.map((p) => (
-                <option key={p.key} value={p.key}>
-                  {p.name}
-                </option>
-              ))}
-            </Select>
-          </Field>
+              <Select
+                onChange={(e) => {
+                  const p = BUILDER_PRESETS.find((x) => x.key === e.target.value);
+                  if (p) {
+                    setInput(structuredClone(p.input));
+                    setName(p.name);
+                  }
+                }}
+              >
+                {BUILDER_PRESETS.map((p) => (
+                  <option key={p.key} value={p.key}>
+                    {p.name}
+                  </option>
+                ))}
+              </Select>
+            </Field>
+          )}
           <NumberField
             label="Tightest turning radius of the machine"
             unit="m"
@@ -439,15 +471,21 @@ export function BuilderForm({
           customerId={customerId}
           onCustomer={setCustomerId}
           customers={customers}
-          error={create.error}
+          error={saving.error}
         />
+        {editing ? (
+          <p className="mt-3 text-sm text-ink-700">
+            Saving rebuilds the turns from these figures. Estimates already run keep the turns they
+            were run with; run a new estimate to see the change.
+          </p>
+        ) : null}
         <div className="mt-4 flex justify-end">
           <Button
             disabled={!parsed.success || !name.trim() || !customerId}
-            busy={create.isPending}
+            busy={saving.isPending}
             onClick={save}
           >
-            Save duty cycle
+            {editing ? "Save changes" : "Save duty cycle"}
           </Button>
         </div>
       </Card>

@@ -62,6 +62,14 @@ export function DutyCycleDetail({ id, canWrite }: { id: string; canWrite: boolea
                 Run an estimate with this duty cycle
               </Link>
             ) : null}
+            {cycle.source === "builder" && cycle.builderInput ? (
+              <Link
+                href={`/duty-cycles/${cycle.id}/edit`}
+                className="inline-flex h-9 items-center rounded-md border border-ink-300 bg-white px-3 text-sm font-medium text-ink-900 hover:bg-ink-50"
+              >
+                Edit the work
+              </Link>
+            ) : null}
             <Button variant="danger" size="sm" onClick={() => setConfirming(true)}>
               Delete
             </Button>

@@ -1,7 +1,10 @@
 "use client";
 
 import Link from "next/link";
-import { useState } from "react";
+import { useEffect, useState } from "react";
+import { formatDate } from "@/lib/format/format";
+import { useDebounced } from "@/lib/ui/use-debounced";
+import { useUrlState } from "@/lib/ui/use-url-state";
 import { DataTableShell } from "@/lib/ui/data-table-shell";
 import { EmptyState } from "@/lib/ui/empty-state";
 import { Input, Select } from "@/lib/ui/input";
@@ -23,12 +26,31 @@ const SOURCE = { telematics: "Log", schedule: "Schedule", builder: "Builder" } a
 
 type TSort = TDutyCycleListState["sort"];
 
-/** The dealership's duty cycles with paging, sorting and filters kept on the server. */
-export function DutyCyclesTable() {
-  const [state, setState] = useState<TDutyCycleListState>(DEFAULT_DUTY_CYCLE_LIST);
+/**
+ * The dealership's duty cycles with paging, sorting and filters kept on the server and in the
+ * URL (back and forward step through them; a copied link opens the same view).
+ */
+export function DutyCyclesTable({ canWrite }: { canWrite: boolean }) {
+  const [urlState, setUrlState] = useUrlState(DEFAULT_DUTY_CYCLE_LIST);
+  const state = urlState as TDutyCycleListState;
   const { data, isFetching, error } = useDutyCycles(state);
-  const set = (patch: Partial<TDutyCycleListState>) =>
-    setState((s) => ({ ...s, page: 1, ...patch }));
+  const set = (patch: Partial<TDutyCycleListState>) => setUrlState({ ...state, page: 1, ...patch });
+  // The search box updates the URL once typing pauses, not on every key.
+  const [text, setText] = useState(state.q);
+  const debounced = useDebounced(text);
+  useEffect(() => {
+    if (debounced !== state.q) set({ q: debounced });
+    // Only the debounced text should trigger this.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [debounced]);
+  // Back and forward change the state from the URL: the search box follows (set while
+  // rendering, React's pattern for state that tracks a prop).
+  const [seenQ, setSeenQ] = useState(state.q);
+  if (seenQ !== state.q) {
+    setSeenQ(state.q);
+    setText(state.q);
+  }
+  const filtered = !!(state.q || state.status || state.source);
   const sortBy = (sort: TSort) =>
     set({ sort, dir: state.sort === sort && state.dir === "asc" ? "desc" : "asc" });
   const arrow = (sort: TSort) => (state.sort === sort ? (state.dir === "asc" ? " ▲" : " ▼") : "");
@@ -53,8 +75,8 @@ export function DutyCyclesTable() {
             <Input
               aria-label="Search by name"
               placeholder="Search by name"
-              value={state.q}
-              onChange={(e) => set({ q: e.target.value })}
+              value={text}
+              onChange={(e) => setText(e.target.value)}
             />
           </div>
           <Select
@@ -90,9 +112,42 @@ export function DutyCyclesTable() {
       }
       isEmpty={data?.items.length === 0}
       empty={
-        <EmptyState title="No duty cycles yet">
-          Upload a telematics log or a turn schedule, or build one from the work the machine does.
-        </EmptyState>
+        filtered ? (
+          <p className="rounded-lg border border-dashed border-ink-300 bg-white p-6 text-center text-ink-700">
+            Nothing matches these filters.{" "}
+            <button
+              type="button"
+              className="font-medium text-furrow-700 underline"
+              onClick={() => {
+                setText("");
+                set({ q: "", status: "", source: "" });
+              }}
+            >
+              Clear filters
+            </button>
+          </p>
+        ) : (
+          <EmptyState
+            title="No duty cycles yet"
+            action={
+              canWrite ? (
+                <span className="flex flex-wrap justify-center gap-3">
+                  <Link
+                    href="/duty-cycles/upload"
+                    className="font-medium text-furrow-700 underline"
+                  >
+                    Upload a log or schedule
+                  </Link>
+                  <Link href="/duty-cycles/build" className="font-medium text-furrow-700 underline">
+                    Build one without a file
+                  </Link>
+                </span>
+              ) : undefined
+            }
+          >
+            Upload a telematics log or a turn schedule, or build one from the work the machine does.
+          </EmptyState>
+        )
       }
       head={
         <tr>
@@ -134,7 +189,7 @@ export function DutyCyclesTable() {
             {c.operatingHours === null ? "—" : c.operatingHours.toFixed(1)}
           </td>
           <td className="px-3 py-2">{c.turnsPerHour === null ? "—" : c.turnsPerHour.toFixed(1)}</td>
-          <td className="px-3 py-2">{new Date(c.createdAt).toLocaleDateString("en-GB")}</td>
+          <td className="px-3 py-2">{formatDate(c.createdAt)}</td>
         </tr>
       ))}
       footer={
@@ -149,7 +204,7 @@ export function DutyCyclesTable() {
                 size="sm"
                 variant="secondary"
                 disabled={state.page <= 1}
-                onClick={() => setState((s) => ({ ...s, page: s.page - 1 }))}
+                onClick={() => setUrlState({ ...state, page: state.page - 1 })}
               >
                 Previous
               </Button>
@@ -157,7 +212,7 @@ export function DutyCyclesTable() {
                 size="sm"
                 variant="secondary"
                 disabled={state.page >= data.pageCount}
-                onClick={() => setState((s) => ({ ...s, page: s.page + 1 }))}
+                onClick={() => setUrlState({ ...state, page: state.page + 1 })}
               >
                 Next
               </Button>

@@ -14,13 +14,17 @@ const theme = buildChartTheme({
 
 export type TBar = { label: string; value: number };
 
-/** A bar chart (visx xychart) with its figures repeated in a table for screen readers. */
+/**
+ * A bar chart (visx xychart) with its figures repeated in a table for screen readers. It takes
+ * the width of its column (three charts side by side on a laptop) unless given one, and tilts
+ * long category names so none is cut off or runs into its neighbour.
+ */
 export function SummaryBarChart({
   title,
   bars,
   valueLabel,
   format = (v) => v.toFixed(1),
-  width = 440,
+  width,
 }: {
   title: string;
   bars: TBar[];
@@ -28,15 +32,16 @@ export function SummaryBarChart({
   format?: (v: number) => string;
   width?: number;
 }) {
+  const tilt = bars.length > 8 || bars.some((b) => b.label.length > 9);
   return (
     <figure className="flex min-w-0 flex-col gap-2">
       <figcaption className="text-sm font-medium text-ink-900">{title}</figcaption>
-      <div className="overflow-x-auto" aria-hidden>
+      <div className="min-w-0" aria-hidden>
         <XYChart
           theme={theme}
           width={width}
-          height={240}
-          margin={{ top: 10, right: 10, bottom: 56, left: 52 }}
+          height={tilt ? 268 : 240}
+          margin={{ top: 10, right: 16, bottom: tilt ? 92 : 56, left: 52 }}
           xScale={{ type: "band", paddingInner: 0.25 }}
           yScale={{ type: "linear", nice: true, zero: true }}
         >
@@ -50,8 +55,8 @@ export function SummaryBarChart({
           <Axis
             orientation="bottom"
             tickLabelProps={{
-              angle: bars.length > 8 ? -40 : 0,
-              textAnchor: bars.length > 8 ? "end" : "middle",
+              angle: tilt ? -40 : 0,
+              textAnchor: tilt ? "end" : "middle",
             }}
           />
           <Axis orientation="left" numTicks={4} label={valueLabel} />

@@ -66,6 +66,7 @@ export const ZUpdateDutyCycle = z
   })
   .refine((u) => Object.keys(u).length > 1, "Nothing to change.");
 export type TUpdateDutyCycle = z.infer<typeof ZUpdateDutyCycle>;
+export type TUpdateDutyCycleInput = z.input<typeof ZUpdateDutyCycle>;
 
 export type TDutyCycleStatus = "pending" | "processing" | "ready" | "failed";
 

@@ -6,16 +6,11 @@ import { Caution, EstimateSafetyCaution } from "@/lib/ui/caution";
 import { useDeleteEstimate, useEstimate } from "@/features/estimates/api/estimates";
 import { radiusBands } from "@/features/estimates/lib/radius-bands";
 import type { TCaution } from "@/lib/scrub";
-import { formatQuantity, fromSi, unitLabel, type TUnitSystem } from "@/lib/format/units";
+import { fromSi, unitLabel, type TUnitSystem } from "@/lib/format/units";
 import { BarChart } from "@/lib/ui/bar-chart";
+import { TurnKindsTable } from "@/features/estimates/components/turn-kinds-table";
 import { DeleteButton } from "@/lib/ui/delete-button";
-import {
-  formatDate,
-  formatMoney,
-  formatNumber,
-  formatPerHour,
-  POSITION_LABELS,
-} from "@/lib/format/format";
+import { formatDate, formatMoney, formatNumber, POSITION_LABELS } from "@/lib/format/format";
 
 /** One short line with the standing caution; all general cautions one click away. */
 function CautionSummary({ cautions }: { cautions: TCaution[] }) {
@@ -285,52 +280,7 @@ export function EstimateResult({
       </div>
 
       <Card title="Turns">
-        <p className="mb-2 text-sm text-ink-700">
-          {r.turns.length} kinds of turn; {r.turns.filter((t) => !t.feasible).length} could not be
-          steered that tight and were left out of the wear. The CSV download has every wheel of
-          every turn.
-        </p>
-        <div className="overflow-x-auto">
-          <table className="min-w-full divide-y divide-ink-200 text-sm">
-            <caption className="sr-only">Turns of the duty cycle</caption>
-            <thead className="bg-ink-100 text-left text-xs font-medium uppercase tracking-wide text-ink-700">
-              <tr>
-                <th scope="col" className="px-3 py-2">
-                  Turn
-                </th>
-                <th scope="col" className="px-3 py-2 text-right">
-                  Per hour
-                </th>
-                <th scope="col" className="px-3 py-2 text-right">
-                  Radius
-                </th>
-                <th scope="col" className="px-3 py-2 text-right">
-                  Turning diameter
-                </th>
-                <th scope="col" className="px-3 py-2">
-                  Steered
-                </th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-ink-100">
-              {r.turns.slice(0, 50).map((t) => (
-                <tr key={t.index}>
-                  <td className="px-3 py-2">{t.label || `Turn ${t.index + 1}`}</td>
-                  <td className="px-3 py-2 text-right">{formatPerHour(t.perHour)}</td>
-                  <td className="px-3 py-2 text-right">
-                    {formatQuantity(system, "distance-m", t.radius, 1)}
-                  </td>
-                  <td className="px-3 py-2 text-right">
-                    {t.turningDiameter === null
-                      ? "—"
-                      : formatQuantity(system, "distance-m", t.turningDiameter, 1)}
-                  </td>
-                  <td className="px-3 py-2">{t.feasible ? "yes" : "too tight"}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <TurnKindsTable result={r} traits={e.turnTraits} system={system} currency={currency} />
       </Card>
     </div>
   );

@@ -1,12 +1,12 @@
 "use client";
 
 import Link from "next/link";
-import { useMemo, useState } from "react";
+import { useMemo } from "react";
 import type { ColumnDef } from "@tanstack/react-table";
 import type { TEstimateRow } from "@/features/estimates/schemas/estimate";
 import { useEstimates, DEFAULT_ESTIMATE_LIST } from "@/features/estimates/api/estimates";
-import { type TListState } from "@/lib/query/list-state";
 import { ServerDataTable } from "@/lib/ui/server-data-table";
+import { useUrlListState } from "@/lib/ui/use-url-list-state";
 import { formatDate, formatMoney, formatNumber, POSITION_LABELS } from "@/lib/format/format";
 import { EmptyState } from "@/lib/ui/empty-state";
 
@@ -76,11 +76,13 @@ export function EstimatesTable({
   machineId?: string;
   pageSize?: number;
 }) {
-  const [state, setState] = useState<TListState>({
-    ...DEFAULT_ESTIMATE_LIST,
-    ...(pageSize ? { pageSize } : {}),
-    filters: { ...(customerId ? { customerId } : {}), ...(machineId ? { machineId } : {}) },
-  });
+  // The customer or machine scope is fixed by the page; page and sort live in the URL ("e_"
+  // where the estimates share a page with another table or are a short recent list).
+  const scope = { ...(customerId ? { customerId } : {}), ...(machineId ? { machineId } : {}) };
+  const [state, setState] = useUrlListState(
+    { ...DEFAULT_ESTIMATE_LIST, ...(pageSize ? { pageSize } : {}) },
+    { prefix: customerId || machineId || pageSize ? "e_" : "", scope },
+  );
   const query = useEstimates(state);
   const columns = useMemo(() => estimateColumns(currency), [currency]);
   return (
@@ -93,12 +95,20 @@ export function EstimatesTable({
       searchLabel="Find an estimate"
       getRowId={(r) => r.id}
       initiallyHidden={["dutyCycleName", "warningCount", ...(customerId ? ["customerName"] : [])]}
+      scopeKeys={Object.keys(scope)}
       empty={
         <EmptyState
           title="No estimates yet"
           action={
             canRun ? (
-              <Link href="/estimates/new" className="font-medium text-furrow-700 underline">
+              <Link
+                href={`/estimates/new${
+                  customerId || machineId
+                    ? `?${new URLSearchParams({ ...(customerId ? { customerId } : {}), ...(machineId ? { machineId } : {}) })}`
+                    : ""
+                }`}
+                className="font-medium text-furrow-700 underline"
+              >
                 Run an estimate
               </Link>
             ) : undefined

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import type { TEstimateResult } from "@/lib/scrub";
+import type { TTurnTrait } from "@/features/estimates/lib/turn-kinds";
 
 export const ZEstimateCreate = z.object({
   machineId: z.uuid("machineId must be the id of one of your machines."),
@@ -35,6 +36,8 @@ export type TEstimateDto = TEstimateRow & {
   machineVersion: number;
   engineVersion: string;
   result: TEstimateResult;
+  /** Direction, surface, speed, load and steering of each turn kind (index-aligned with result.turns). */
+  turnTraits: TTurnTrait[];
 };
 
 /** An estimate's result never changes; only its title may. */

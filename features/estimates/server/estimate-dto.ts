@@ -3,6 +3,7 @@ import type { TEstimate } from "@/db/schema";
 import type { TEstimateResult } from "@/lib/scrub";
 import type { TEstimateDto, TEstimateRow } from "@/features/estimates/schemas/estimate";
 import { iso } from "@/features/platform";
+import { turnTraitsFromInputs, type TTurnTrait } from "@/features/estimates/lib/turn-kinds";
 
 export function toEstimateRow(
   row: Pick<
@@ -46,5 +47,13 @@ export function toEstimateDto(row: TEstimate, customerName: string | null): TEst
     machineVersion: row.machineVersion,
     engineVersion: row.engineVersion,
     result: row.result as TEstimateResult,
+    turnTraits: turnTraitsFromInputs(row.inputs, defaultLayout(row.inputs)),
   };
+}
+
+/** The machine's own steering layout from the frozen inputs (turns without a mode use it). */
+function defaultLayout(inputs: unknown) {
+  const layout = (inputs as { machine?: { steering?: { layout?: string } } } | null)?.machine
+    ?.steering?.layout;
+  return (layout ?? "trapezoid") as TTurnTrait["steeringMode"];
 }

@@ -1,13 +1,12 @@
 "use client";
 
 import Link from "next/link";
-import { useState } from "react";
 import type { ColumnDef } from "@tanstack/react-table";
 import { STEERING_LAYOUTS, type TSteeringLayout } from "@/lib/scrub";
 import type { TMachineRow } from "@/features/machines/schemas/machine";
 import { useMachines, DEFAULT_MACHINE_LIST } from "@/features/machines/api/machines";
-import { type TListState } from "@/lib/query/list-state";
 import { ServerDataTable } from "@/lib/ui/server-data-table";
+import { useUrlListState } from "@/lib/ui/use-url-list-state";
 import { formatDate } from "@/lib/format/format";
 import { LAYOUT_LABELS } from "@/features/machines/lib/steering-layouts";
 import { EmptyState } from "@/lib/ui/empty-state";
@@ -62,12 +61,16 @@ export function MachinesTable({
   customerId?: string;
   templatesOnly?: boolean;
 }) {
-  const [state, setState] = useState<TListState>({
-    ...DEFAULT_MACHINE_LIST,
-    filters: {
-      ...(customerId ? { customerId } : {}),
-      ...(templatesOnly ? { template: "true" } : {}),
-    },
+  // The customer (or templates-only) scope is fixed by the page; the user's page, sort and
+  // filters live in the URL ("m_" on a customer page, which also shows its estimates).
+  const scope = {
+    ...(customerId ? { customerId } : {}),
+    ...(templatesOnly ? { template: "true" } : {}),
+  };
+  const [state, setState] = useUrlListState(DEFAULT_MACHINE_LIST, {
+    prefix: customerId ? "m_" : "",
+    filterKeys: templatesOnly ? ["layout"] : ["layout", "template"],
+    scope,
   });
   const query = useMachines(state);
   const setFilter = (key: string, value: string) => {
@@ -86,6 +89,7 @@ export function MachinesTable({
       searchLabel="Find a machine"
       getRowId={(r) => r.id}
       initiallyHidden={["version", "updatedAt", ...(customerId ? ["customerName"] : [])]}
+      scopeKeys={Object.keys(scope)}
       filters={
         <>
           <label className="flex flex-col gap-1 text-sm font-medium text-ink-800">

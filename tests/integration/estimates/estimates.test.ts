@@ -69,6 +69,24 @@ describe("estimates API", () => {
       JSON.stringify(estimate(inputs.machine, inputs.dutyCycle, inputs.options)),
     );
     expect(rerun).toEqual(row!.result);
+
+    // Each turn kind carries what the duty cycle said about it, for the estimate page's turns
+    // table (direction, surface, speed, load, steering), read from the frozen inputs.
+    const one = await call(getOne, team.estimator.cookie, `/api/v1/estimates/${res.body.id}`, {
+      params: { id: res.body.id },
+    });
+    expect(one.body.turnTraits).toHaveLength(res.body.result.turns.length);
+    inputs.dutyCycle.turns.forEach((kind, i) => {
+      expect(one.body.turnTraits[i]).toMatchObject({
+        direction: kind.turn.direction,
+        surface: kind.turn.surface,
+        speed: kind.turn.speed,
+        loadState: kind.turn.loadState,
+        steeringMode: kind.turn.steeringMode ?? inputs.machine.steering.layout,
+        headingChange: kind.turn.headingChange,
+        abrasion: expect.any(Number),
+      });
+    });
   });
 
   it.each([

@@ -3,12 +3,13 @@ import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { cleanup, render, screen, within } from "@testing-library/react";
 import { AppRouterContext } from "next/dist/shared/lib/app-router-context.shared-runtime";
 import { afterEach, describe, expect, it } from "vitest";
-import { estimate, ENGINE_VERSION } from "@/lib/scrub";
+import { estimate, ENGINE_VERSION, ZDutyCycle } from "@/lib/scrub";
 import { DEMO_MACHINES } from "@/lib/demo/machines";
 import { DEMO_DUTY_CYCLES } from "@/lib/demo/duty-cycles";
 import { estimateKeys } from "@/features/estimates/api/estimates";
 import { EstimateResult } from "@/features/estimates/components/estimate-result";
 import type { TEstimateDto } from "@/features/estimates/schemas/estimate";
+import { turnTraitsFromInputs } from "@/features/estimates/lib/turn-kinds";
 
 const router = {
   push: () => {},
@@ -40,6 +41,10 @@ const dto: TEstimateDto = {
   machineVersion: 1,
   engineVersion: ENGINE_VERSION,
   result,
+  turnTraits: turnTraitsFromInputs(
+    { dutyCycle: ZDutyCycle.parse(DEMO_DUTY_CYCLES[demo.id]!) },
+    demo.machine.steering.layout,
+  ),
 };
 
 function show(system: "metric" | "imperial", shown: TEstimateDto = dto) {
@@ -117,5 +122,54 @@ describe("estimate result page", () => {
     const p = result.positions[0]!;
     const row = within(table).getAllByRole("row")[1]!;
     expect(within(row).getByText((p.wearPer100h.total / 25.4).toFixed(3))).toBeTruthy();
+  });
+
+  it("merges identical turn rows and shows what tells kinds apart and what each costs in scrub", () => {
+    const headland = {
+      label: "Cultivating: headland bulb turn",
+      direction: "left" as const,
+      radius: 5.5,
+      headingChange: 180,
+      speed: 1.5,
+      surface: "firm-soil" as const,
+    };
+    const cycle = ZDutyCycle.parse({
+      name: "Spring cultivating",
+      turns: [
+        ...Array.from({ length: 6 }, () => ({ turn: headland, perHour: 11 / 6 })),
+        { turn: { ...headland, direction: "right" }, perHour: 4 },
+      ],
+      straight: { distancePerHour: 4000, speed: 2.5, surfaceShares: { "firm-soil": 1 } },
+    });
+    const r = estimate(demo.machine, cycle);
+    show("metric", {
+      ...dto,
+      result: r,
+      turnTraits: turnTraitsFromInputs({ dutyCycle: cycle }, demo.machine.steering.layout),
+    });
+    const table = screen.getByTestId("turns-table");
+    const rows = within(table).getAllByRole("row").slice(1);
+    expect(rows).toHaveLength(2);
+    const headers = within(table)
+      .getAllByRole("columnheader")
+      .map((h) => h.textContent);
+    expect(headers).toContain("Direction");
+    expect(headers).toContain("Scrub energy");
+    expect(headers).toContain("Scrub wear");
+    expect(headers).toContain("Scrub cost per hour (GBP)");
+    // The shared traits are said once, not repeated in every row.
+    expect(headers).not.toContain("Surface");
+    expect(screen.getByTestId("turn-kinds-summary").textContent).toMatch(
+      /5 identical rows of the duty cycle merged.*Shared by every kind: Firm soil · 5\.4 km\/h · unladen/,
+    );
+    const merged = rows.find((row) => within(row).queryByText("× 6 rows"))!;
+    expect(within(merged).getByText("11.0")).toBeTruthy();
+    expect(within(merged).getByText("left")).toBeTruthy();
+    // Two kinds share all the scrub: the two energy percentages add up to 100 %.
+    const energy = rows.map((row) =>
+      Number(within(row).getAllByRole("cell").at(-3)!.textContent!.replace(" %", "")),
+    );
+    expect(energy[0]! + energy[1]!).toBeCloseTo(100, 0);
+    expect(within(table).getAllByText(/^£\d/)).toHaveLength(2);
   });
 });

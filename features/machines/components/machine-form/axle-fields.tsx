@@ -1,6 +1,7 @@
 "use client";
 
 import { get, useFormContext, useWatch } from "react-hook-form";
+import type { TWarning } from "@/lib/scrub";
 import { Field } from "@/lib/ui/field";
 import { Input } from "@/lib/ui/input";
 import { FIELD_HELP } from "@/features/machines/lib/field-help";
@@ -8,16 +9,24 @@ import type { TUnitSystem } from "@/lib/format/units";
 import { NumberField } from "@/features/machines/components/machine-form/number-field";
 import { TyreSizePreview } from "@/features/machines/components/machine-form/tyre-size-preview";
 import type { TMachineFormValues } from "@/features/machines/components/machine-form/form-values";
+import { ProfileCheckNote } from "@/features/machines/components/machine-form/profile-check-note";
 
-/** Track, loads and tyre fitment of one axle; the pivot track only when the axle steers. */
+/**
+ * Track, loads and tyre fitment of one axle; the pivot track only when the axle steers. The
+ * engine's load-over-capacity check shows under the tyre figures as soon as load and capacity
+ * are both entered.
+ */
 export function AxleFields({
   axle,
   steered,
   system,
+  capacity,
 }: {
   axle: "front" | "rear";
   steered: boolean;
   system: TUnitSystem;
+  /** The engine's load-over-capacity warnings for this axle. */
+  capacity: TWarning[];
 }) {
   const {
     register,
@@ -70,6 +79,9 @@ export function AxleFields({
           system={system}
         />
       </div>
+      {capacity.map((w, i) => (
+        <ProfileCheckNote key={i} warning={w} testId={`capacity-check-${axle}`} />
+      ))}
       <details className="rounded-md bg-ink-50 p-3">
         <summary className="cursor-pointer text-sm font-medium text-ink-800">
           Data-book values (override the size&apos;s nominal dimensions)

@@ -1,21 +1,36 @@
 "use client";
 
 import { useFormContext, useWatch } from "react-hook-form";
-import type { TDrive } from "@/lib/scrub";
+import type { TDrive, TProfileChecks } from "@/lib/scrub";
 import { Field } from "@/lib/ui/field";
 import { Select } from "@/lib/ui/input";
 import { FIELD_HELP } from "@/features/machines/lib/field-help";
 import type { TUnitSystem } from "@/lib/format/units";
 import { NumberField } from "@/features/machines/components/machine-form/number-field";
 import type { TMachineFormValues } from "@/features/machines/components/machine-form/form-values";
+import { ProfileCheckNote } from "@/features/machines/components/machine-form/profile-check-note";
+
+const signedPercent = (fraction: number) =>
+  `${fraction < 0 ? "−" : "+"}${Math.abs(fraction * 100).toLocaleString("en-GB", { minimumFractionDigits: 1, maximumFractionDigits: 1 })} %`;
 
 const DRIVE_DEFAULTS: Record<TDrive["type"], TDrive> = {
   "2wd": { type: "2wd", drivenAxle: "rear" },
-  "front-assist": { type: "front-assist", gearRatio: 1.3 },
+  // No invented gear ratio: it comes from the tractor maker's data and sets the lead.
+  "front-assist": { type: "front-assist" } as TDrive,
   "4wd": { type: "4wd", interAxleRatio: 1 },
 };
 
-export function DriveFields({ system }: { system: TUnitSystem }) {
+/**
+ * Drive line. With coupled axles the front-axle lead is worked out live from the gear ratio and
+ * the two tyre sizes (the engine's own lead and band check), before any estimate is run.
+ */
+export function DriveFields({
+  system,
+  checks,
+}: {
+  system: TUnitSystem;
+  checks: Pick<TProfileChecks, "lead" | "leadWarning">;
+}) {
   const { register, setValue, control } = useFormContext<TMachineFormValues>();
   const type = useWatch({ control, name: "spec.drive.type" }) as TDrive["type"];
   const typeField = register("spec.drive.type", {
@@ -61,6 +76,21 @@ export function DriveFields({ system }: { system: TUnitSystem }) {
           />
         ) : null}
       </div>
+      {type !== "2wd" ? (
+        <p className="text-sm text-ink-700" data-testid="lead-check">
+          Front-axle lead in straight travel:{" "}
+          {checks.lead === null ? (
+            <span className="text-ink-600">
+              enter both tyre sizes and the {type === "4wd" ? "inter-axle" : "gear"} ratio
+            </span>
+          ) : (
+            <span className="font-medium text-ink-900">{signedPercent(checks.lead)}</span>
+          )}
+        </p>
+      ) : null}
+      {checks.leadWarning ? (
+        <ProfileCheckNote warning={checks.leadWarning} testId="lead-warning" />
+      ) : null}
     </fieldset>
   );
 }

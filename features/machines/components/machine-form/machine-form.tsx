@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useDeferredValue, useMemo } from "react";
 import { FormProvider, get, useForm, useWatch, type Path } from "react-hook-form";
-import { ZMachine, type TSteeringLayout } from "@/lib/scrub";
+import { profileChecks, ZMachine, type TSteeringLayout } from "@/lib/scrub";
 import { Button } from "@/lib/ui/button";
 import { Card } from "@/lib/ui/card";
 import { Caution } from "@/lib/ui/caution";
@@ -65,6 +65,9 @@ export function MachineForm({
   const values = useWatch({ control }) as TMachineFormValues;
   const layout = values.spec?.steering?.layout as TSteeringLayout;
   const steered = steeredAxles(layout ?? "trapezoid");
+
+  // The engine's lead and load checks, on whatever is filled in so far.
+  const checks = useMemo(() => profileChecks(toRecordInput(values, system).spec), [values, system]);
 
   // The drawing follows the last valid machine; deferred so typing stays responsive.
   const deferred = useDeferredValue(values);
@@ -133,9 +136,19 @@ export function MachineForm({
               </div>
             </fieldset>
             <SteeringFields system={system} />
-            <AxleFields axle="front" steered={steered.includes("front")} system={system} />
-            <AxleFields axle="rear" steered={steered.includes("rear")} system={system} />
-            <DriveFields system={system} />
+            <AxleFields
+              axle="front"
+              steered={steered.includes("front")}
+              system={system}
+              capacity={checks.capacity.front}
+            />
+            <AxleFields
+              axle="rear"
+              steered={steered.includes("rear")}
+              system={system}
+              capacity={checks.capacity.rear}
+            />
+            <DriveFields system={system} checks={checks} />
             <fieldset className="flex flex-col gap-4 rounded-lg border border-ink-200 p-4">
               <legend className="px-1 text-base font-medium text-ink-900">
                 Maker&apos;s figures

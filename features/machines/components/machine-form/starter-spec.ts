@@ -1,26 +1,23 @@
 import type { TMachineInput } from "@/lib/scrub";
+import { defaultSteering } from "@/features/machines/lib/steering-layouts";
 
 /**
- * Starting values for a new machine: typical of a mid-size tractor (common practice, no source),
- * there to be overwritten. Name and tyre sizes start empty so they are always entered.
+ * A new machine starts blank wherever a figure belongs to the actual machine: wheelbase, tracks,
+ * axle loads, tyre sizes, lug depths, prices and the front-axle gear ratio are entered from the
+ * machine, a weighbridge ticket and the tyre maker's data, never left at an invented value (the
+ * schema requires them, so the form cannot be saved until they are filled). What starts set is
+ * a choice of layout and drive (front steer with a track-rod linkage, rear drive with front-wheel
+ * assist) and the linkage's typical starting geometry the layout picker also uses, drawn live
+ * beside the form for the user to match to the machine.
  */
-export const STARTER_SPEC: TMachineInput = {
+export const STARTER_SPEC = {
   name: "",
-  wheelbase: 2.7,
   axles: {
-    front: {
-      track: 1.9,
-      load: 2800,
-      tyre: { designation: "", treadDepthNew: 40, treadDepthReplace: 10, price: 1200 },
-    },
-    rear: {
-      track: 1.9,
-      load: 4200,
-      tyre: { designation: "", treadDepthNew: 50, treadDepthReplace: 12, price: 2000 },
-    },
+    front: { tyre: { designation: "" } },
+    rear: { tyre: { designation: "" } },
   },
-  steering: { layout: "trapezoid", maxLock: 52, armLength: 0.2, armAngle: 16, tieRod: "behind" },
+  steering: defaultSteering("trapezoid"),
   otherSteeringModes: [],
-  drive: { type: "front-assist", gearRatio: 1.3 },
+  drive: { type: "front-assist" },
   limits: {},
-};
+} as unknown as TMachineInput;
