@@ -270,7 +270,7 @@ export function EstimateResult({
             data={positions}
             stacks={[
               { key: "base", label: "Base rolling wear", className: "fill-ink-300" },
-              { key: "scrub", label: "Scrub wear", className: "fill-furrow-600" },
+              { key: "scrub", label: "Scrub wear", className: "fill-plum-600" },
             ]}
             value={(p, key) => wear(key === "base" ? p.wearPer100h.base : p.wearPer100h.scrub)}
             yLabel={`Wear (${wearUnit}/100 h)`}

@@ -172,4 +172,19 @@ describe("estimate result page", () => {
     expect(energy[0]! + energy[1]!).toBeCloseTo(100, 0);
     expect(within(table).getAllByText(/^£\d/)).toHaveLength(2);
   });
+  it("draws scrub in one colour in every chart, apart from slip", () => {
+    const { container } = show("metric");
+    const fills = (label: RegExp) =>
+      [...container.querySelectorAll("figure")]
+        .filter((f) => label.test(f.querySelector("figcaption")?.textContent ?? ""))
+        .flatMap((f) => [...f.querySelectorAll("svg[role=img] rect")])
+        .flatMap((r) => (r.getAttribute("class") ?? "").split(/\s+/))
+        .filter((c) => c.startsWith("fill-") && c !== "fill-ink-300");
+    const scrubPerHour = new Set(fills(/^Scrub distance/));
+    const scrubWear = new Set(fills(/wear/i));
+    const slip = new Set(fills(/slip angle/i));
+    expect(scrubPerHour.size).toBe(1);
+    expect(scrubWear).toEqual(scrubPerHour);
+    expect([...slip].some((c) => scrubPerHour.has(c))).toBe(false);
+  });
 });
