@@ -6,3 +6,4 @@ export { createApiToken } from "./server/create-api-token";
 export { listApiTokens } from "./server/list-api-tokens";
 export { revokeApiToken } from "./server/revoke-api-token";
 export type { TApiTokenDto, TCreateApiTokenInput } from "./schemas/api-token";
+export { getOpenApiDocument, type TOpenApiDocument } from "./openapi/document";
