@@ -728,6 +728,12 @@ const ACTION_FIXTURES: Record<string, TActionFixture> = {
     // Acts only on the caller's own dealership (no ids in the input), so a rival may too.
     selfOnly: true,
   },
+  "features/auth/server/actions/session-actions.ts#setDealershipCurrencyAction": {
+    args: () => [undefined, form({ currency: "EUR" })],
+    allowed: ["dealer_admin"],
+    // Changes only the caller's own dealership (no ids in the input), so a rival may too.
+    selfOnly: true,
+  },
   "features/api/server/actions/api-token-actions.ts#createApiTokenAction": {
     args: () => [undefined, form({ name: "Matrix token", scopes: ["read"] })],
     allowed: ["dealer_admin"],
