@@ -91,13 +91,9 @@ export const ZTimestamp = z
   .openapi({ format: "date-time", example: "2026-11-18T09:30:00.000Z" });
 
 export const ZDeleteQuery = z.object({
-  confirm: z
-    .enum(["true"])
-    .optional()
-    .openapi({
-      description:
-        "Without `confirm=true` nothing is deleted: the answer (409) lists what would go.",
-    }),
+  confirm: z.enum(["true"]).optional().openapi({
+    description: "Without `confirm=true` nothing is deleted: the answer (409) lists what would go.",
+  }),
 });
 
 export const ZDeleted = z
