@@ -25,14 +25,14 @@ function principalOf(actor: TActor): string {
 
 /**
  * What the request is, for telling a true retry from a different request under the same key.
- * A JSON body is hashed whole; a streamed file upload is not read here (it may be hundreds of
- * megabytes), so it is known by its name, type and length.
+ * A JSON body is hashed whole; any other body (a streamed CSV upload, an image) is not read
+ * here (it may be hundreds of megabytes), so it is known by its name, type and length.
  */
 async function fingerprint(req: Request): Promise<string> {
   const url = new URL(req.url);
   const type = req.headers.get("content-type") ?? "";
   const hash = createHash("sha256").update(`${req.method} ${url.pathname}${url.search}\n`);
-  if (type.includes("json") || type.startsWith("text/") || !req.body) {
+  if (type.includes("json") || !req.body) {
     hash.update(await req.clone().text());
   } else {
     hash.update(
