@@ -57,6 +57,14 @@ export const NOT_FOUND = {
   },
 } as const;
 
+/** A DELETE without `confirm=true` (some routes say what would go with a 409 instead). */
+export const CONFIRM = {
+  400: {
+    description: "Not confirmed: send `confirm=true` to delete.",
+    content: errorContent,
+  },
+} as const;
+
 export const CONFLICT = {
   409: {
     description: "The record changed or is in use; the message says why.",
@@ -92,7 +100,8 @@ export const ZTimestamp = z
 
 export const ZDeleteQuery = z.object({
   confirm: z.enum(["true"]).optional().openapi({
-    description: "Without `confirm=true` nothing is deleted: the answer (409) lists what would go.",
+    description:
+      "Without `confirm=true` nothing is deleted: the answer (400 or 409) says what would go.",
   }),
 });
 

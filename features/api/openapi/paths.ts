@@ -38,6 +38,7 @@ import { ZReadingCreate, ZReadingsImport } from "@/features/calibration";
 import type { TApiScope } from "@/lib/authz/api-scopes";
 import {
   COMMON_ERRORS,
+  CONFIRM,
   CONFLICT,
   IDEMPOTENCY,
   INPUT_ERRORS,
@@ -149,7 +150,7 @@ export function registerPaths(registry: OpenAPIRegistry) {
       access: "read_write",
       summary: "Delete a customer and everything of theirs",
       request: { params: ZIdParams, query: ZDeleteQuery },
-      responses: { 200: json(ZDeleted, "Deleted."), ...NOT_FOUND, ...CONFLICT },
+      responses: { 200: json(ZDeleted, "Deleted."), ...CONFIRM, ...NOT_FOUND, ...CONFLICT },
     },
   });
   route("/api/v1/sites", "Customers", {
@@ -183,7 +184,7 @@ export function registerPaths(registry: OpenAPIRegistry) {
       access: "read_write",
       summary: "Delete a site",
       request: { params: ZIdParams, query: ZDeleteQuery },
-      responses: { 200: json(ZDeleted, "Deleted."), ...NOT_FOUND, ...CONFLICT },
+      responses: { 200: json(ZDeleted, "Deleted."), ...CONFIRM, ...NOT_FOUND, ...CONFLICT },
     },
   });
 
@@ -219,7 +220,7 @@ export function registerPaths(registry: OpenAPIRegistry) {
       access: "read_write",
       summary: "Delete a machine",
       request: { params: ZIdParams, query: ZDeleteQuery },
-      responses: { 200: json(ZDeleted, "Deleted."), ...NOT_FOUND, ...CONFLICT },
+      responses: { 200: json(ZDeleted, "Deleted."), ...CONFIRM, ...NOT_FOUND, ...CONFLICT },
     },
   });
   route("/api/v1/machines/{id}/copy", "Machines", {
@@ -406,7 +407,7 @@ export function registerPaths(registry: OpenAPIRegistry) {
       access: "read_write",
       summary: "Delete a duty cycle",
       request: { params: ZIdParams, query: ZDeleteQuery },
-      responses: { 200: json(ZDeleted, "Deleted."), ...NOT_FOUND, ...CONFLICT },
+      responses: { 200: json(ZDeleted, "Deleted."), ...CONFIRM, ...NOT_FOUND, ...CONFLICT },
     },
   });
   route("/api/v1/duty-cycles/{id}/retry", "Duty cycles", {
@@ -464,7 +465,7 @@ export function registerPaths(registry: OpenAPIRegistry) {
       access: "read_write",
       summary: "Delete a mapping template",
       request: { params: ZIdParams, query: ZDeleteQuery },
-      responses: { 200: json(ZDeleted, "Deleted."), ...NOT_FOUND, ...CONFLICT },
+      responses: { 200: json(ZDeleted, "Deleted."), ...CONFIRM, ...NOT_FOUND, ...CONFLICT },
     },
   });
 
@@ -504,7 +505,7 @@ export function registerPaths(registry: OpenAPIRegistry) {
       access: "read_write",
       summary: "Delete an estimate",
       request: { params: ZIdParams, query: ZDeleteQuery },
-      responses: { 200: json(ZDeleted, "Deleted."), ...NOT_FOUND, ...CONFLICT },
+      responses: { 200: json(ZDeleted, "Deleted."), ...CONFIRM, ...NOT_FOUND, ...CONFLICT },
     },
   });
   route("/api/v1/estimates/{id}/csv", "Estimates", {
