@@ -6,8 +6,12 @@ import { NextResponse, type NextFetchEvent, type NextRequest } from "next/server
 import { proxyAuth } from "@/features/auth/server/proxy-auth";
 import { pageCsp } from "@/lib/platform/security-headers.mjs";
 
-/** Pages a signed-out visitor may open: home, sign-in, invitation, password reset, dev pages. */
-const PUBLIC_PAGE = /^\/(?:$|sign-in(?:\/|$)|invite\/|reset-password(?:\/|$)|dev\/)/;
+/**
+ * Pages a signed-out visitor may open: home, sign-in, invitation, password reset, dev pages,
+ * and the API reference (it describes the API, never anyone's data).
+ */
+const PUBLIC_PAGE =
+  /^\/(?:$|sign-in(?:\/|$)|invite\/|reset-password(?:\/|$)|dev\/|developers(?:\/|$))/;
 
 const withSession: unknown = proxyAuth((req) => {
   const { pathname } = req.nextUrl;

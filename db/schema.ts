@@ -7,3 +7,4 @@ export * from "@/db/tables/billing";
 export * from "@/db/tables/reports";
 export * from "@/db/tables/readings";
 export * from "@/db/tables/options";
+export * from "@/db/tables/api";

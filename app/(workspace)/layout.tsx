@@ -24,7 +24,12 @@ export default async function WorkspaceLayout({ children }: { children: ReactNod
         { href: "/tyre-plan", label: "Tyre plan" },
         ...(can(actor, "billing:read") ? [{ href: "/billing", label: "Report plan" }] : []),
         ...authNavItems(actor),
-        ...(can(actor, "staff:manage") ? [{ href: "/settings/branding", label: "Branding" }] : []),
+        ...(can(actor, "staff:manage")
+          ? [
+              { href: "/settings/branding", label: "Branding" },
+              { href: "/settings/api-tokens", label: "API tokens" },
+            ]
+          : []),
       ]
     : [
         { href: "/dashboard", label: "Home" },

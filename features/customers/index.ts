@@ -9,3 +9,7 @@ export { resolveCustomerField } from "./server/resolve-customer";
 export { fillSurfaces, MissingSurfaceMixError, type TSurfaceMixShares } from "./lib/fill-surfaces";
 export type { TCustomerDto, TCustomerRow } from "./schemas/customer";
 export type { TSiteDto, TSurfaceMix } from "./schemas/site";
+// Request schemas, also read by the OpenAPI document (features/api/openapi).
+export { ZCustomerInput, ZCustomerPatch } from "./schemas/customer";
+export { ZSiteInput, ZSitePatch } from "./schemas/site";
+export { ZCustomerListQuery, ZSiteListQuery } from "./schemas/customer-list-query";

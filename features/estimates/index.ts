@@ -6,3 +6,6 @@ export { listEstimates } from "./server/list-estimates";
 export { loadDutyCycleForEstimate } from "./server/load-duty-cycle";
 export type { TEstimateDto, TEstimateRow } from "./schemas/estimate";
 export { estimateTurnsCsv } from "./lib/estimate-csv";
+// Request schemas, also read by the OpenAPI document (features/api/openapi).
+export { ZEstimateCreate, ZEstimatePatch } from "./schemas/estimate";
+export { ZEstimateListQuery } from "./schemas/estimate-list-query";

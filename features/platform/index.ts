@@ -25,6 +25,7 @@ export {
 } from "./server/paging";
 export {
   assertAccess,
+  assertMayRead,
   assertMayRunEstimates,
   assertMayWrite,
   customerScope,

@@ -17,3 +17,5 @@ export {
   useReport,
   useReportVersion,
 } from "@/features/reports/api/reports";
+// Request schemas, also read by the OpenAPI document (features/api/openapi).
+export { ZBrandingPatch, ZReportMessage, ZReportShare } from "./schemas/report";

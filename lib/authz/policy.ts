@@ -93,6 +93,7 @@ function roleAllows(role: TRole, actor: TActor, action: TAction, resource?: TOwn
  */
 export function can(actor: TActor, action: TAction, resource?: TOwned): boolean {
   if (resource && resource.dealershipId !== actor.dealershipId) return false;
+  if (actor.apiToken && !actor.apiToken.grants.has(action)) return false;
   return actor.roles.some((role) => roleAllows(role, actor, action, resource));
 }
 

@@ -52,9 +52,23 @@ const { getDb, getPool } = await import("@/db/client");
 const schema = await import("@/db/schema");
 const { createTestDealership, createTestMember, uniqueTag } =
   await import("@/tests/support/session");
+const { makeApiToken } = await import("@/tests/support/api-tokens");
 
 type TRoleName = "dealer_admin" | "estimator" | "billing_admin" | "customer";
-type TCallerName = "anonymous" | TRoleName | "rival";
+/**
+ * API tokens made by the home dealership's dealer admin, one per scope, plus a revoked and an
+ * expired one: extra principals that must stay within their scopes (lib/authz/api-scopes.ts).
+ */
+type TTokenName =
+  "token_read" | "token_write" | "token_reports" | "token_revoked" | "token_expired";
+const TOKEN_CALLERS: TTokenName[] = [
+  "token_read",
+  "token_write",
+  "token_reports",
+  "token_revoked",
+  "token_expired",
+];
+type TCallerName = "anonymous" | TRoleName | "rival" | TTokenName;
 const HOME_ROLES: TRoleName[] = ["dealer_admin", "estimator", "billing_admin", "customer"];
 const MUTATING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
 const METHODS = ["GET", "HEAD", "POST", "PUT", "PATCH", "DELETE", "OPTIONS"] as const;
@@ -304,6 +318,9 @@ type TWorld = {
   };
   rival: { dealershipId: string; dealershipName: string; records: TRecords };
   members: Record<TRoleName | "rival", TMember>;
+  /** `Authorization` header values of the home dealership's tokens. */
+  tokens: Record<TTokenName, string>;
+  readTokenId: string;
 };
 
 let world: TWorld;
@@ -349,7 +366,20 @@ async function seedWorld(): Promise<TWorld> {
       expiresAt: new Date(Date.now() + 86_400_000),
     })
     .returning();
+  const admin = members.dealer_admin.actor;
+  const readToken = await makeApiToken(db, admin, ["read"]);
+  const tokens: TWorld["tokens"] = {
+    token_read: readToken.authorization,
+    token_write: (await makeApiToken(db, admin, ["read_write"])).authorization,
+    token_reports: (await makeApiToken(db, admin, ["reports"])).authorization,
+    token_revoked: (await makeApiToken(db, admin, ["read_write", "reports"], { revoked: true }))
+      .authorization,
+    token_expired: (await makeApiToken(db, admin, ["read_write", "reports"], { expired: true }))
+      .authorization,
+  };
   return {
+    tokens,
+    readTokenId: readToken.id,
     home: {
       dealershipId: home.id,
       dealershipName: home.name,
@@ -385,6 +415,8 @@ function forbiddenMarkers(caller: TCallerName): string[] {
   if (caller === "anonymous") return [...home, ...rival];
   if (caller === "rival") return home;
   if (caller === "customer") return [...rival, ...markersOf(w.home.other), w.home.templateName];
+  // A refused token learns nothing about the dealership either.
+  if (caller === "token_revoked" || caller === "token_expired") return [...home, ...rival];
   return rival;
 }
 
@@ -411,6 +443,9 @@ type TRouteFixture = {
 const ROUTE_FIXTURES: Record<string, TRouteFixture> = {
   "/api/health": { public: true },
   "/api/v1/billing/webhook": { public: true, signed: true },
+  "/api/v1/openapi.json": { public: true },
+  // A valid query, so a refusal cannot hide behind a 400.
+  "/api/v1/search": { query: "q=Matrix" },
   "/api/auth/[...nextauth]": { public: true, params: () => ({ nextauth: ["session"] }) },
   "/api/v1/sites": {
     body: (w) => ({
@@ -517,8 +552,12 @@ function urlFor(route: TRoute, params: Record<string, string | string[]>, method
   return `http://localhost:3000/${path}${query ? `?${query}` : ""}`;
 }
 
+function isToken(caller: TCallerName): caller is TTokenName {
+  return (TOKEN_CALLERS as string[]).includes(caller);
+}
+
 function cookieOf(caller: TCallerName): string {
-  return caller === "anonymous" ? "" : world.members[caller].cookie;
+  return caller === "anonymous" || isToken(caller) ? "" : world.members[caller].cookie;
 }
 
 type TOutcome = { status: number; body: string };
@@ -535,6 +574,7 @@ async function callRoute(
   const headers: Record<string, string> = { "x-forwarded-for": "198.51.100.77" };
   const cookie = cookieOf(caller);
   if (cookie) headers.cookie = cookie;
+  if (isToken(caller)) headers.authorization = world.tokens[caller];
   let body: string | undefined;
   if (MUTATING.has(method)) {
     headers["content-type"] = "application/json";
@@ -556,6 +596,7 @@ function mustBeDenied(route: TRoute, method: string, caller: TCallerName): boole
   const fixture = ROUTE_FIXTURES[route.pattern];
   if (fixture?.public) return false;
   if (caller === "anonymous") return true;
+  if (isToken(caller)) return tokenMustBeDenied(route, method, caller);
   const dynamic = route.segments.some((s) => s.startsWith("["));
   // The params always name the home dealership's records, of a customer other than the
   // customer account's own.
@@ -569,6 +610,27 @@ function mustBeDenied(route: TRoute, method: string, caller: TCallerName): boole
     return !writers.includes(role);
   }
   return false;
+}
+
+/**
+ * What each token may do: read → every read; read_write → plus the workspace writes (not
+ * reports, not dealer-admin settings); reports → reports only (and the dealership's branding,
+ * which any member reads). Revoked and expired tokens are refused everywhere (401, checked below).
+ */
+function tokenMustBeDenied(route: TRoute, method: string, caller: TTokenName): boolean {
+  const isReport = route.pattern.startsWith("/api/v1/reports");
+  const writers = ROUTE_FIXTURES[route.pattern]?.writers;
+  switch (caller) {
+    case "token_read":
+      return MUTATING.has(method);
+    case "token_write":
+      return MUTATING.has(method) && (isReport || writers !== undefined);
+    case "token_reports":
+      if (MUTATING.has(method)) return !isReport;
+      return !isReport && !route.pattern.startsWith("/api/v1/branding");
+    default:
+      return true;
+  }
 }
 
 // ── Server actions ──────────────────────────────────────────────────────────────────────
@@ -606,12 +668,6 @@ const ACTION_FIXTURES: Record<string, TActionFixture> = {
   "features/auth/server/actions/session-actions.ts#setUnitSystemAction": {
     args: () => [undefined, form({ unitSystem: "imperial" })],
     allowed: HOME_ROLES,
-    selfOnly: true,
-  },
-  "features/auth/server/actions/session-actions.ts#setDealershipCurrencyAction": {
-    args: () => [undefined, form({ currency: "EUR" })],
-    allowed: ["dealer_admin"],
-    // Acts only on the caller's active dealership (no ids in the input), so a rival admin may too.
     selfOnly: true,
   },
   "features/auth/server/actions/team-actions.ts#inviteMemberAction": {
@@ -671,6 +727,22 @@ const ACTION_FIXTURES: Record<string, TActionFixture> = {
     allowed: ["dealer_admin", "billing_admin"],
     // Acts only on the caller's own dealership (no ids in the input), so a rival may too.
     selfOnly: true,
+  },
+  "features/auth/server/actions/session-actions.ts#setDealershipCurrencyAction": {
+    args: () => [undefined, form({ currency: "EUR" })],
+    allowed: ["dealer_admin"],
+    // Changes only the caller's own dealership (no ids in the input), so a rival may too.
+    selfOnly: true,
+  },
+  "features/api/server/actions/api-token-actions.ts#createApiTokenAction": {
+    args: () => [undefined, form({ name: "Matrix token", scopes: ["read"] })],
+    allowed: ["dealer_admin"],
+    // Makes a token for the caller's own dealership (no ids in the input), so a rival may too.
+    selfOnly: true,
+  },
+  "features/api/server/actions/api-token-actions.ts#revokeApiTokenAction": {
+    args: (w) => [undefined, form({ tokenId: w.readTokenId })],
+    allowed: ["dealer_admin"],
   },
   "features/auth/server/actions/team-actions.ts#removeMemberAction": {
     args: (w) => [undefined, form({ userId: w.members.estimator.user.id })],
@@ -753,6 +825,7 @@ describe("authorization matrix: route handlers", () => {
       "billing_admin",
       "estimator",
       "dealer_admin",
+      ...TOKEN_CALLERS,
     ];
     const problems: string[] = [];
     for (const method of methods) {
@@ -782,6 +855,10 @@ describe("authorization matrix: route handlers", () => {
         }
         if (caller === "anonymous" && denied && out.status !== 401 && out.status !== 404) {
           problems.push(`${method} as anonymous: expected 401, got ${out.status}`);
+        }
+        const refusedToken = caller === "token_revoked" || caller === "token_expired";
+        if (refusedToken && !isPublic && out.status !== 401) {
+          problems.push(`${method} as ${caller}: expected 401, got ${out.status}`);
         }
         const leaked = leaks(out.body, caller);
         if (leaked.length)

@@ -1,6 +1,7 @@
 import { getDb } from "@/db/client";
 import type { TMachineInput } from "@/lib/scrub";
 import { createTestMember, requestAs } from "@/tests/support/session";
+import { documentedProblems as responseProblems } from "@/tests/support/openapi";
 
 export const db = getDb();
 export const BASE = "http://localhost:3000";
@@ -27,6 +28,16 @@ export async function call(
   } catch {
     // CSV and other text bodies stay as text
   }
+  // Every answer an integration test sees must be as the OpenAPI document describes it (tests
+  // that call a handler under a made-up path like "/x" are about the handler, not the path).
+  const problems = responseProblems(
+    init.method ?? "GET",
+    `/${path.replace(/^\//, "")}`,
+    res.status,
+    res.headers.get("content-type"),
+    body,
+  );
+  if (problems.length) throw new Error(`Answer not as documented:\n${problems.join("\n")}`);
   return { status: res.status, body, headers: res.headers };
 }
 

@@ -1,6 +1,7 @@
 import type { TActor } from "@/lib/authz/actor";
-import { getActorFromRequest } from "@/features/auth/server/get-actor";
-import { unauthenticated } from "@/app/api/_lib/errors";
+import { getDb } from "@/db/client";
+import { auditTokenRequest, authenticateRequest, withIdempotency } from "@/features/api";
+import { jsonError, unauthenticated } from "@/app/api/_lib/errors";
 
 export { jsonError, forbidden, notFound, unauthenticated } from "@/app/api/_lib/errors";
 
@@ -18,14 +19,25 @@ function flattenParams(raw: Record<string, string | string[] | undefined>): Reco
 }
 
 /**
- * Wraps a route handler so it runs only for a signed-in member; anyone else gets 401 JSON.
- * The handler still asks `can(actor, ...)` for what it does: signed in is not authorized.
+ * Wraps a route handler so it runs only for a signed-in member or the holder of a valid API
+ * token (`Authorization: Bearer`); anyone else gets 401 JSON, a token over its rate limit 429.
+ * The handler still asks `can(actor, ...)` for what it does: signed in is not authorized, and a
+ * token's scopes narrow `can` further. A POST with an Idempotency-Key runs at most once.
  */
 export function withActor(handler: (ctx: TActorContext) => Promise<Response>) {
   return async (req: Request, context: TRouteContext): Promise<Response> => {
-    const actor = await getActorFromRequest(req);
-    if (!actor) return unauthenticated();
+    const db = getDb();
+    const auth = await authenticateRequest(db, req);
+    if (!auth) return unauthenticated();
+    if (!auth.ok) {
+      const res = jsonError(auth.status, auth.code, auth.message);
+      for (const [k, v] of Object.entries(auth.headers)) res.headers.set(k, v);
+      return res;
+    }
+    const { actor } = auth;
     const params = flattenParams((await context?.params) ?? {});
-    return handler({ req, actor, params });
+    const res = await withIdempotency(db, req, actor, () => handler({ req, actor, params }));
+    await auditTokenRequest(db, req, actor, res.status);
+    return res;
   };
 }

@@ -13,6 +13,11 @@ const KIND_LABELS: Record<string, string> = {
   invitation_accepted: "Invitation accepted",
   role_changed: "Roles changed",
   member_removed: "Member removed",
+  api_token_created: "API token created",
+  api_token_revoked: "API token revoked",
+  api_token_refused: "API token refused (revoked or expired)",
+  api_token_rate_limited: "API token over its rate limit",
+  api_request: "Change made with an API token",
 };
 
 export type TAuditRow = {

@@ -13,7 +13,12 @@ export type TAuditKind =
   | "invitation_revoked"
   | "invitation_accepted"
   | "role_changed"
-  | "member_removed";
+  | "member_removed"
+  | "api_token_created"
+  | "api_token_revoked"
+  | "api_token_refused"
+  | "api_token_rate_limited"
+  | "api_request";
 
 /** Records one security event, once per dealership it concerns (or once with none). */
 export async function recordAudit(

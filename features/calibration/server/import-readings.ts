@@ -7,7 +7,7 @@ import { parseReadingsCsv } from "@/lib/calibration";
 import { loadMachine } from "@/features/calibration/server/load-machine";
 import { CalibrationError, parseOrThrow } from "@/features/calibration/server/errors";
 
-const ZImport = z.object({
+export const ZImport = z.object({
   csv: z
     .string()
     .min(1, "The file is empty.")

@@ -6,7 +6,7 @@ import type { TActor } from "@/lib/authz/actor";
 import type { TPage } from "@/lib/query/list-query";
 import type { TCustomerListQuery } from "@/features/customers/schemas/customer-list-query";
 import type { TCustomerRow } from "@/features/customers/schemas/customer";
-import { customerScope } from "@/features/platform";
+import { assertMayRead, customerScope } from "@/features/platform";
 import {
   bind,
   iso,
@@ -40,6 +40,7 @@ export async function listCustomers({
     ...pageWindow(query.page, query.pageSize),
   };
   const filters: SQL[] = [eq(customers.dealershipId, bind("dealershipId"))];
+  assertMayRead(actor, "customer");
   const scope = customerScope(actor);
   if (scope) {
     filters.push(eq(customers.id, bind("scope")));

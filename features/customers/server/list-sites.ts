@@ -6,7 +6,7 @@ import type { TActor } from "@/lib/authz/actor";
 import type { TPage } from "@/lib/query/list-query";
 import type { TSiteListQuery } from "@/features/customers/schemas/customer-list-query";
 import type { TSiteDto } from "@/features/customers/schemas/site";
-import { customerScope } from "@/features/platform";
+import { assertMayRead, customerScope } from "@/features/platform";
 import {
   bind,
   likePattern,
@@ -35,6 +35,7 @@ export async function listSites({
     ...pageWindow(query.page, query.pageSize),
   };
   const filters: SQL[] = [eq(sites.dealershipId, bind("dealershipId"))];
+  assertMayRead(actor, "site");
   const scope = customerScope(actor);
   if (scope) {
     filters.push(eq(sites.customerId, bind("scope")));

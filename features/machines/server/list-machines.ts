@@ -6,7 +6,7 @@ import type { TActor } from "@/lib/authz/actor";
 import type { TPage } from "@/lib/query/list-query";
 import type { TMachineListQuery } from "@/features/machines/schemas/machine-list-query";
 import type { TMachineRow } from "@/features/machines/schemas/machine";
-import { customerScope } from "@/features/platform";
+import { assertMayRead, customerScope } from "@/features/platform";
 import {
   bind,
   iso,
@@ -41,6 +41,7 @@ export async function listMachines({
     ...pageWindow(query.page, query.pageSize),
   };
   const filters: SQL[] = [eq(machines.dealershipId, bind("dealershipId"))];
+  assertMayRead(actor, "machine");
   const scope = customerScope(actor);
   if (scope) {
     filters.push(eq(machines.customerId, bind("scope")));

@@ -1,7 +1,7 @@
 import "server-only";
 import type { TActor } from "@/lib/authz/actor";
 import { can, readScope, type TAction } from "@/lib/authz/policy";
-import { forbidden, notFound } from "@/features/platform/server/api-error";
+import { ApiError, forbidden, notFound } from "@/features/platform/server/api-error";
 
 export type TRecordKind = "customer" | "site" | "machine" | "estimate" | "duty-cycle";
 type TOwnedRow = { dealershipId: string; customerId?: string | null };
@@ -20,6 +20,15 @@ export function assertAccess(
     throw notFound(kind);
   if (action === "write" && !can(actor, `${kind}:write` as TAction, ownership(resource)))
     throw forbidden(`this ${kind}`);
+}
+
+/**
+ * Throws 403 unless the actor may list this kind of record at all. Every role may, so this
+ * bites only for an API token whose scopes leave the kind out.
+ */
+export function assertMayRead(actor: TActor, kind: TRecordKind) {
+  if (!can(actor, `${kind}:read` as TAction))
+    throw new ApiError(403, "forbidden", `Your role or API token may not read ${kind}s.`);
 }
 
 /** Throws 403 unless the actor's role may create this kind of record. */

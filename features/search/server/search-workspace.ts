@@ -5,7 +5,7 @@ import { customers, machines } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
 import type { TSearchQuery } from "@/features/search/schemas/search";
 import type { TSearchResult } from "@/features/search/schemas/search";
-import { customerScope } from "@/features/platform";
+import { assertMayRead, customerScope } from "@/features/platform";
 import { likePattern } from "@/features/platform";
 
 /** Customers (name, contact) and machines (name, kind) matching the text, within what the actor sees. */
@@ -19,6 +19,8 @@ export async function searchWorkspace({
   query: TSearchQuery;
 }): Promise<TSearchResult> {
   const pattern = likePattern(query.q);
+  assertMayRead(actor, "customer");
+  assertMayRead(actor, "machine");
   const scope = customerScope(actor);
   const customerFilters: SQL[] = [
     eq(customers.dealershipId, actor.dealershipId),

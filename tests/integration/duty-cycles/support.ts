@@ -1,5 +1,6 @@
 import { samplePath, type TPathLeg } from "@/lib/duty-cycles/synthetic-path";
 import type { TColumnMapping } from "@/lib/duty-cycles/column-mapping";
+import { documentedProblems as responseProblems } from "@/tests/support/openapi";
 
 type THandler = (
   req: Request,
@@ -41,6 +42,16 @@ export async function callRoute(
   } catch {
     // CSV stays text
   }
+  // Every answer an integration test sees must be as the OpenAPI document describes it (tests
+  // that call a handler under a made-up path like "/x" are about the handler, not the path).
+  const problems = responseProblems(
+    init.method ?? "GET",
+    new URL(path, "http://localhost:3000").pathname,
+    res.status,
+    res.headers.get("content-type"),
+    parsed,
+  );
+  if (problems.length) throw new Error(`Answer not as documented:\n${problems.join("\n")}`);
   return { status: res.status, body: parsed, headers: res.headers };
 }
 
