@@ -23,6 +23,9 @@ describe("options journey", () => {
     // 1. The seeded estimate of the demo row-crop tractor.
     await page.goto(`${baseUrl}/estimates`);
     await page.getByLabel("Find an estimate").fill("140 hp row-crop tractor");
+    // The search lands in the address once typing pauses; wait for it, as a reader waits for
+    // the list to settle, so that late update does not follow the click.
+    await page.waitForURL(/[?&]q=140/);
     await page
       .getByRole("link", { name: /Hollin Vale Farm's 140 hp row-crop tractor/ })
       .first()

@@ -88,6 +88,7 @@ export function StudiesTable({
       searchLabel={kind === "comparison" ? "Find a comparison" : "Find a sweep"}
       getRowId={(r) => r.id}
       initiallyHidden={machineId ? ["machineName"] : []}
+      scopeKeys={["customerId", "machineId"]}
       empty={
         <EmptyState title={kind === "comparison" ? "No comparisons yet" : "No sweeps yet"}>
           {kind === "comparison"
