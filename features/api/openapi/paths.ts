@@ -535,7 +535,12 @@ export function registerPaths(registry: OpenAPIRegistry) {
         access: "read",
         summary: `List ${plural}`,
         request: { query: ZStudyListQuery },
-        responses: { 200: json(R.ZStudyPage, `One page of ${plural}.`), ...INPUT_ERRORS },
+        responses: {
+          200: json(R.ZStudyPage, `One page of ${plural}.`),
+          ...INPUT_ERRORS,
+          // A customer account reads studies only as quote reports shared with it.
+          ...NOT_FOUND,
+        },
       },
       post: {
         access: "read_write",
@@ -579,9 +584,14 @@ export function registerPaths(registry: OpenAPIRegistry) {
     },
     post: {
       access: "reports",
-      summary: "Start a draft report from an estimate",
+      summary: "Start a draft report from an estimate or a stored comparison",
       request: creating(ZReportCreate),
-      responses: { 201: json(R.ZReport, "The draft."), ...INPUT_ERRORS, ...IDEMPOTENCY },
+      responses: {
+        201: json(R.ZReport, "The draft."),
+        ...INPUT_ERRORS,
+        ...NOT_FOUND,
+        ...IDEMPOTENCY,
+      },
     },
   });
   route("/api/v1/reports/{id}", "Reports", {
