@@ -1,12 +1,6 @@
 import Link from "next/link";
-import { notFound, redirect } from "next/navigation";
-import { getDb } from "@/db/client";
-import { getActor } from "@/features/auth/server/get-actor";
+import { loadSetupPage } from "@/features/options/server/load-setup-page";
 import { SetupForm } from "@/features/options/components/setup-form";
-import { readSetupBase } from "@/features/options/server/read-setup-base";
-import { isUuid } from "@/features/platform/server/found";
-import { ApiError } from "@/features/platform";
-import { can } from "@/lib/authz/policy";
 import { formatMoney } from "@/lib/format/format";
 import { EstimateSafetyCaution } from "@/lib/ui/caution";
 
@@ -14,15 +8,7 @@ export const metadata = { title: "Try another setup" };
 
 export default async function TrySetupPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const actor = await getActor();
-  if (!actor) redirect("/sign-in");
-  if (!can(actor, "estimate:run")) redirect(`/estimates/${id}`);
-  if (!isUuid(id)) notFound();
-  const base = await readSetupBase({ db: getDb(), actor, estimateId: id }).catch((e: unknown) => {
-    if (e instanceof ApiError && e.status === 404) return null;
-    throw e;
-  });
-  if (!base) notFound();
+  const { actor, base } = await loadSetupPage(id);
   return (
     <div className="flex flex-col gap-4">
       <div>
