@@ -22,7 +22,7 @@ cleanup() {
   trap - INT TERM EXIT
   log "stopping"
   stop_supervised
-  [ "$STARTED_PG" = 1 ] && pg_down .pgdata
+  if [ "$STARTED_PG" = 1 ]; then pg_down .pgdata; fi
   log "stopped"
 }
 trap cleanup INT TERM EXIT

@@ -20,7 +20,8 @@ ensure_poppler
 STARTED_PG=0
 cleanup() {
   trap - INT TERM EXIT
-  [ "$STARTED_PG" = 1 ] && pg_down .pgdata-test
+  # A cluster that was already running is left running; the run keeps its own exit status.
+  if [ "$STARTED_PG" = 1 ]; then pg_down .pgdata-test; fi
 }
 trap cleanup INT TERM EXIT
 "$PGBIN/pg_isready" -q -h 127.0.0.1 -p "$PGPORT" || STARTED_PG=1
