@@ -43,8 +43,21 @@ describe("public API journey", () => {
     const customers = await json("/api/v1/customers?q=Hollin%20Vale");
     expect(customers.status).toBe(200);
     const customerId = customers.body.items[0].id as string;
+    // The dealer's system registers its own machine (a copy of one on record), so this journey's
+    // estimate never becomes another journey's demo machine's latest one.
     const machines = await json(`/api/v1/machines?customerId=${customerId}`);
-    const machineId = machines.body.items[0].id as string;
+    const onRecord = await json(`/api/v1/machines/${machines.body.items[0].id as string}`);
+    const registered = await json("/api/v1/machines", {
+      method: "POST",
+      body: JSON.stringify({
+        customerId,
+        kind: onRecord.body.kind,
+        spec: { ...onRecord.body.spec, name: `Bridge tractor ${uniqueTag()}` },
+      }),
+      headers: { "content-type": "application/json" },
+    });
+    expect(registered.status).toBe(201);
+    const machineId = registered.body.id as string;
 
     const { csv } = knownTelematicsCsv();
     const uploaded = await json("/api/v1/uploads", {
