@@ -74,8 +74,12 @@ function getOr404(ctx: TFakeContext, kind: string, id: string): TObj {
   return obj;
 }
 
+/** Newest first, as the real API lists; within one second, the later-made object first. */
 function list(data: TObj[], url: string, limit = 10) {
-  const sorted = [...data].sort((a, b) => Number(b.created ?? 0) - Number(a.created ?? 0));
+  const sorted = data
+    .map((o, i) => ({ o, i }))
+    .sort((a, b) => Number(b.o.created ?? 0) - Number(a.o.created ?? 0) || b.i - a.i)
+    .map(({ o }) => o);
   return {
     object: "list",
     data: sorted.slice(0, limit),
