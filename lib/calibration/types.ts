@@ -46,3 +46,18 @@ export type TRefusalCode = "too-few-readings" | "too-few-hours" | "ill-condition
 export type TFitResult =
   | { ok: true; multipliers: TMultipliers; quality: TFitQuality }
   | { ok: false; code: TRefusalCode; reason: string; n: number; hoursCovered: number };
+
+/**
+ * What a calibrated estimate records in its inputs (and studies and reports built on it carry):
+ * where the fitted multipliers came from and how well they fit.
+ */
+export type TCalibrationRecord = {
+  source: "machine" | "pooled";
+  multipliers: { base: number; scrub: number };
+  r2: number;
+  rmse: number;
+  n: number;
+  hoursCovered: number;
+  pooledMachines: number | null;
+  basisEstimateId: string;
+};

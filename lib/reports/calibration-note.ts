@@ -1,17 +1,12 @@
+import type { TCalibrationRecord } from "@/lib/calibration";
 import type { TAssumption } from "@/lib/reports/assumptions";
 
-/**
- * What a calibrated estimate records about its calibration (features/calibration stores it in the
- * estimate's inputs): where the fitted multipliers came from and how well they fit.
- */
-export type TReportCalibration = {
-  source: "machine" | "pooled";
-  multipliers: { base: number; scrub: number };
-  r2: number;
-  n: number;
-  hoursCovered: number;
-  pooledMachines?: number | null;
-};
+/** The part of a calibration record a report states. */
+export type TReportCalibration = Pick<
+  TCalibrationRecord,
+  "source" | "multipliers" | "r2" | "n" | "hoursCovered"
+> &
+  Partial<Pick<TCalibrationRecord, "pooledMachines">>;
 
 const fixed = (v: number, digits: number) => v.toFixed(digits);
 

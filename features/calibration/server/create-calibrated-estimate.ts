@@ -3,7 +3,7 @@ import { and, eq } from "drizzle-orm";
 import type { DbOrTx } from "@/db/client";
 import { estimates } from "@/db/schema";
 import type { TActor } from "@/lib/authz/actor";
-import { calibratedEngineInputs } from "@/lib/calibration";
+import { calibratedEngineInputs, type TCalibrationRecord } from "@/lib/calibration";
 import {
   estimate,
   type TDutyCycleInput,
@@ -13,17 +13,6 @@ import {
 import { can } from "@/lib/authz/policy";
 import { CalibrationError, forbidden } from "@/features/calibration/server/errors";
 import { getMachineCalibration } from "@/features/calibration/server/get-machine-calibration";
-
-export type TCalibrationRecord = {
-  source: "machine" | "pooled";
-  multipliers: { base: number; scrub: number };
-  r2: number;
-  rmse: number;
-  n: number;
-  hoursCovered: number;
-  pooledMachines: number | null;
-  basisEstimateId: string;
-};
 
 /**
  * Re-runs the machine's latest estimate with its calibration applied and stores it as a new

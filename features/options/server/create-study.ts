@@ -8,7 +8,7 @@ import { ZComparisonCreate, ZSweepCreate, type TStudyKind } from "../schemas/stu
 import { can } from "@/lib/authz/policy";
 import { assertMayRun } from "./access";
 import { ApiError, parseOrThrow } from "@/features/platform";
-import type { TReportCalibration } from "@/lib/reports/calibration-note";
+import type { TCalibrationRecord } from "@/lib/calibration";
 import { runStudy, type TStudyInputs } from "./run-study";
 import { PARAMETER_LABELS } from "../lib/setup-choices";
 
@@ -46,7 +46,7 @@ export async function createStudy({
     machine: TMachineInput;
     dutyCycle: TDutyCycleInput;
     options?: TEstimateOptions;
-    calibration?: TReportCalibration | null;
+    calibration?: TCalibrationRecord | null;
   };
   const engine = {
     machine: frozen.machine,

@@ -2,7 +2,7 @@ import "server-only";
 import type { DbOrTx } from "@/db/client";
 import type { TActor } from "@/lib/authz/actor";
 import type { TDutyCycleInput, TEstimateOptions, TMachineInput } from "@/lib/scrub";
-import type { TReportCalibration } from "@/lib/reports/calibration-note";
+import type { TCalibrationRecord } from "@/lib/calibration";
 import type { TComparisonDto } from "../schemas/study";
 import { getStudy } from "./get-study";
 import type { TStudyInputs } from "./run-study";
@@ -17,7 +17,7 @@ export async function readComparisonSource(o: { db: DbOrTx; actor: TActor; id: s
   machine: TMachineInput;
   dutyCycle: TDutyCycleInput;
   engineOptions: TEstimateOptions;
-  calibration: TReportCalibration | null;
+  calibration: TCalibrationRecord | null;
 }> {
   const row = await getStudy({ ...o, kind: "comparison" });
   const inputs = row.inputs as Extract<TStudyInputs, { kind: "comparison" }>;

@@ -10,7 +10,7 @@ import {
   type TSweepSpec,
 } from "@/lib/scrub";
 import { ApiError } from "@/features/platform";
-import type { TReportCalibration } from "@/lib/reports/calibration-note";
+import type { TCalibrationRecord } from "@/lib/calibration";
 
 /**
  * What a study freezes: the estimate's engine inputs (with its engine options, so a study of a
@@ -21,7 +21,7 @@ type TFrozenEngineInputs = {
   dutyCycle: TDutyCycleInput;
   engineOptions?: TEstimateOptions;
   /** The source estimate's calibration record, when it was a calibrated estimate. */
-  calibration?: TReportCalibration | null;
+  calibration?: TCalibrationRecord | null;
 };
 export type TStudyInputs =
   | (TFrozenEngineInputs & { kind: "comparison"; options: TOptionSpec[]; hours: number })
