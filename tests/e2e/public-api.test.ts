@@ -52,7 +52,7 @@ describe("public API journey", () => {
       body: JSON.stringify({
         customerId,
         kind: onRecord.body.kind,
-        spec: { ...onRecord.body.spec, name: `Bridge tractor ${uniqueTag()}` },
+        spec: { ...onRecord.body.spec, name: `Hollin Vale bridge tractor ${uniqueTag()}` },
       }),
       headers: { "content-type": "application/json" },
     });

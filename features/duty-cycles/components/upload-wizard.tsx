@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useEffect, useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { ZSurfaceKind, type TSurfaceKind } from "@/lib/scrub/schemas";
 import {
   mappingProblems,
@@ -70,6 +70,11 @@ export function UploadWizard({
   const [customerId, setCustomerId] = useState(customers[0]?.id ?? "");
   const [templateName, setTemplateName] = useState("");
   const [templateApplied, setTemplateApplied] = useState(false);
+  // The latest preview and whether the user picked the kind, read by handlers that may run
+  // before React re-renders with a preview that just arrived (a stale closure would map an
+  // empty header row and leave the import disabled).
+  const latestPreview = useRef<TPreview | null>(null);
+  const kindChosen = useRef(false);
   const upload = useUploadFile(setProgress);
   const create = useCreateDutyCycle();
   const templates = useMappingTemplates(mapping.kind);
@@ -82,6 +87,7 @@ export function UploadWizard({
     readPreview(file, { delimiter: delimiterChoice, encoding: mapping.encoding })
       .then((p) => {
         if (stale) return;
+        latestPreview.current = p;
         setPreview(p);
         setPreviewError(p.rows.length === 0 ? "The file shows no rows. Is it empty?" : null);
         setMapping((m) => {
@@ -89,7 +95,8 @@ export function UploadWizard({
             ? (p.rows[0] ?? [])
             : (p.rows[0] ?? []).map((_c, i) => `Column ${i + 1}`);
           const body = m.hasHeader ? p.rows.slice(1) : p.rows;
-          const kind = templateApplied ? m.kind : guessKind(headers, body.length);
+          const kind =
+            templateApplied || kindChosen.current ? m.kind : guessKind(headers, body.length);
           return {
             ...m,
             kind,
@@ -125,6 +132,7 @@ export function UploadWizard({
   const uploaded = upload.data;
 
   function chooseFile(f: File | null) {
+    latestPreview.current = null;
     setPreview(null);
     setEncodingDetected(false);
     if (f) {
@@ -204,11 +212,16 @@ export function UploadWizard({
               value={mapping.kind}
               onChange={(e) => {
                 const kind = e.target.value as TFileKind;
-                setMapping((m) => ({
-                  ...m,
-                  kind,
-                  columns: guessColumns(kind, m.hasHeader ? headers : [], bodyRows[0]),
-                }));
+                kindChosen.current = true;
+                setMapping((m) => {
+                  const rows = latestPreview.current?.rows ?? [];
+                  const body = m.hasHeader ? rows.slice(1) : rows;
+                  return {
+                    ...m,
+                    kind,
+                    columns: guessColumns(kind, m.hasHeader ? (rows[0] ?? []) : [], body[0]),
+                  };
+                });
               }}
             >
               <option value="telematics">Telematics log (one row per sample)</option>
