@@ -8,10 +8,10 @@ import {
   type SortingState,
   type VisibilityState,
 } from "@tanstack/react-table";
-import { useEffect, useId, useState, type ReactNode } from "react";
+import { useId, useState, type ReactNode } from "react";
 import type { TPage } from "@/lib/query/list-query";
 import type { TListState } from "@/lib/query/list-state";
-import { useDebounced } from "@/lib/ui/use-debounced";
+import { useSearchBox } from "@/lib/ui/use-search-box";
 import { Button } from "@/lib/ui/button";
 import { DataTableShell } from "@/lib/ui/data-table-shell";
 import { Input, Select } from "@/lib/ui/input";
@@ -64,26 +64,11 @@ export function ServerDataTable<T>({
   scopeKeys = [],
   getRowId,
 }: Props<T>) {
-  const [text, setText] = useState(state.q);
-  const debounced = useDebounced(text);
+  const search = useSearchBox(state.q, (q) => onStateChange({ ...state, q, page: 1 }));
   const [visibility, setVisibility] = useState<VisibilityState>(
     Object.fromEntries(initiallyHidden.map((c) => [c, false])),
   );
   const searchId = useId();
-
-  useEffect(() => {
-    if (debounced !== state.q) onStateChange({ ...state, q: debounced, page: 1 });
-    // Only the debounced text should trigger this.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [debounced]);
-
-  // Back and forward change the state from the URL: the search box follows (set while
-  // rendering, React's pattern for state that tracks a prop).
-  const [seenQ, setSeenQ] = useState(state.q);
-  if (seenQ !== state.q) {
-    setSeenQ(state.q);
-    setText(state.q);
-  }
 
   const sorting: SortingState = [{ id: state.sort, desc: state.dir === "desc" }];
   const page = query.data;
@@ -116,7 +101,7 @@ export function ServerDataTable<T>({
     Object.entries(state.filters).some(([k, v]) => !scopeKeys.includes(k) && Boolean(v));
 
   return (
-    <div aria-busy={query.isFetching || undefined}>
+    <div aria-busy={query.isFetching || undefined} onClickCapture={search.onClickCapture}>
       <DataTableShell
         caption={caption}
         toolbar={
@@ -128,8 +113,8 @@ export function ServerDataTable<T>({
               <Input
                 id={searchId}
                 type="search"
-                value={text}
-                onChange={(e) => setText(e.target.value)}
+                value={search.text}
+                onChange={(e) => search.setText(e.target.value)}
                 placeholder="Type to filter"
               />
             </div>
@@ -183,7 +168,7 @@ export function ServerDataTable<T>({
                 type="button"
                 className="font-medium text-furrow-700 underline"
                 onClick={() => {
-                  setText("");
+                  search.setText("");
                   onStateChange({ ...state, q: "", filters: scope, page: 1 });
                 }}
               >

@@ -1,6 +1,6 @@
 // @vitest-environment jsdom
-import { cleanup, render, screen } from "@testing-library/react";
-import { afterEach, describe, expect, it } from "vitest";
+import { act, cleanup, fireEvent, render, screen } from "@testing-library/react";
+import { afterEach, describe, expect, it, vi } from "vitest";
 import { listState } from "@/lib/query/list-state";
 import { EmptyState } from "@/lib/ui/empty-state";
 import { ServerDataTable } from "@/lib/ui/server-data-table";
@@ -46,7 +46,64 @@ describe("empty tables", () => {
     show({ customerId: "7f1c7a5e-1d1e-4c59-9a52-2f7c62f1b1a1", layout: "skid" });
     expect(screen.getByText(/Nothing matches these filters/)).toBeTruthy();
     cleanup();
-    show({}, "zetor");
+    show({}, "quillby");
     expect(screen.getByText(/Nothing matches these filters/)).toBeTruthy();
+  });
+});
+
+describe("search box", () => {
+  const onePage = {
+    ...emptyPage,
+    data: { items: [{ id: "row-1" }], page: 1, pageSize: 25, total: 1, pageCount: 1 },
+  };
+  function showWithLink(onStateChange: (s: unknown) => void) {
+    render(
+      <ServerDataTable<{ id: string }>
+        caption="Machines"
+        columns={[
+          {
+            id: "name",
+            header: "Name",
+            cell: ({ row }) => (
+              // The link does not navigate in jsdom; the click alone is what matters.
+              <a href={`#${row.original.id}`} onClick={(e) => e.preventDefault()}>
+                {row.original.id}
+              </a>
+            ),
+          },
+        ]}
+        state={listState({ sort: "name" })}
+        onStateChange={onStateChange}
+        query={onePage}
+        searchLabel="Find a machine"
+        getRowId={(r) => r.id}
+        empty={null}
+      />,
+    );
+  }
+  afterEach(() => vi.useRealTimers());
+
+  it("applies the text once typing pauses", () => {
+    vi.useFakeTimers();
+    const changes: unknown[] = [];
+    showWithLink((s) => changes.push(s));
+    fireEvent.change(screen.getByLabelText("Find a machine"), { target: { value: "yard" } });
+    expect(changes).toEqual([]);
+    act(() => vi.advanceTimersByTime(300));
+    expect(changes).toEqual([expect.objectContaining({ q: "yard", page: 1 })]);
+  });
+
+  it("drops a search still waiting when the user follows a link out of the list", () => {
+    vi.useFakeTimers();
+    const changes: unknown[] = [];
+    showWithLink((s) => changes.push(s));
+    fireEvent.change(screen.getByLabelText("Find a machine"), { target: { value: "yard" } });
+    fireEvent.click(screen.getByRole("link", { name: "row-1" }));
+    act(() => vi.advanceTimersByTime(300));
+    expect(changes).toEqual([]);
+    // Typing again means the user stayed: the search applies as usual.
+    fireEvent.change(screen.getByLabelText("Find a machine"), { target: { value: "yard 2" } });
+    act(() => vi.advanceTimersByTime(300));
+    expect(changes).toEqual([expect.objectContaining({ q: "yard 2" })]);
   });
 });
