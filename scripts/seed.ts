@@ -8,6 +8,7 @@ import { seedBilling, seedBillingPlans } from "@/scripts/seed/billing";
 import { seedReportBranding } from "@/scripts/seed/reports";
 import { seedReadings } from "@/scripts/seed/readings";
 import { seedOptions } from "@/scripts/seed/options";
+import { seedDemoReports } from "@/scripts/seed/demo-reports";
 
 const db = getDb();
 // Plans first: a new dealership starts its trial from them.
@@ -39,4 +40,9 @@ const options = await seedOptions(db, {
   adminEmail: "admin@brackenridge.test",
 });
 console.log(`[seed] comparisons: ${options.added} new`);
+const demoReports = await seedDemoReports(db, {
+  dealership: tenancy.dealership,
+  estimatorEmail: "estimator@brackenridge.test",
+});
+console.log(`[seed] shared quote reports: ${demoReports.added} new`);
 await getPool().end();

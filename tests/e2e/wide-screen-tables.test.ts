@@ -190,4 +190,43 @@ describe("table state in the URL", () => {
     expect(await page.getByText("Nothing matches these filters").count()).toBe(0);
     await context.close();
   });
+  it("filters quote reports by customer in the address; the farm's own account reads its report", async () => {
+    const context = await browser.newContext({ viewport: { width: 1366, height: 900 } });
+    const page = await context.newPage();
+    await signIn(page, "estimator@brackenridge.test");
+    await page.goto(`${baseUrl}/reports`);
+    const table = page.getByTestId("reports-table");
+    // The demo data holds one issued, shared report for the farm (scripts/seed/demo-reports.ts).
+    const seeded = /^Tyre options compared · Hollin Vale Farm's 140 hp row-crop tractor/;
+    await table.getByRole("link", { name: seeded }).first().waitFor();
+
+    await page.getByLabel("Customer", { exact: true }).selectOption({ label: "Hollin Vale Farm" });
+    await page.waitForURL(/[?&]customerId=[0-9a-f-]{36}/);
+    await expect
+      .poll(async () => {
+        const customers = await table.locator("tbody tr td:nth-child(2)").allTextContents();
+        return customers.length > 0 && customers.every((c) => c === "Hollin Vale Farm");
+      })
+      .toBe(true);
+
+    // A search nothing matches says so; back returns to the farm's reports.
+    const filtered = page.url();
+    await page.getByLabel("Search", { exact: true }).fill(`no such report ${uniqueTag()}`);
+    await page.waitForURL(/[?&]q=no/);
+    await page.getByText("Nothing matches these filters.").waitFor();
+    await page.goBack();
+    await page.waitForURL(filtered);
+    await table.getByRole("link", { name: seeded }).first().waitFor();
+    expect(await page.getByLabel("Search", { exact: true }).inputValue()).toBe("");
+
+    // The customer's own account sees the report shared with it, and no customer filter.
+    const farm = await browser.newContext();
+    const portal = await farm.newPage();
+    await signIn(portal, "morwenna@hollinvale.test");
+    await portal.goto(`${baseUrl}/reports`);
+    await portal.getByTestId("reports-table").getByRole("link", { name: seeded }).first().waitFor();
+    expect(await portal.getByLabel("Customer", { exact: true }).count()).toBe(0);
+    await farm.close();
+    await context.close();
+  });
 });

@@ -1,34 +1,69 @@
 "use client";
 
 import Link from "next/link";
-import { useState } from "react";
 import { Button } from "@/lib/ui/button";
 import { Input, Select } from "@/lib/ui/input";
 import { EmptyState } from "@/lib/ui/empty-state";
+import { useSearchBox } from "@/lib/ui/use-search-box";
+import { useUrlState } from "@/lib/ui/use-url-state";
 import { REPORT_STATUSES, STATUS_LABELS } from "@/lib/reports";
-import { DEFAULT_REPORT_LIST, useReports } from "@/features/reports/api/reports";
+import {
+  DEFAULT_REPORT_LIST,
+  useReports,
+  type TReportListState,
+} from "@/features/reports/api/reports";
 
 const day = (iso: string | null) =>
   iso
     ? new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })
     : "—";
 
-/** The dealership's reports (or a customer's shared ones): status, filters and paging. */
-export function ReportsTable({ asCustomer }: { asCustomer: boolean }) {
-  const [state, setState] = useState(DEFAULT_REPORT_LIST);
+/**
+ * The dealership's reports (or a customer's shared ones): status, customer, search and paging,
+ * kept in the URL so back, forward and a copied link give the same view.
+ */
+export function ReportsTable({
+  asCustomer,
+  customers = [],
+}: {
+  asCustomer: boolean;
+  /** The customers a staff user may filter by; a customer account sees only its own. */
+  customers?: { id: string; name: string }[];
+}) {
+  const [urlState, setUrlState] = useUrlState(DEFAULT_REPORT_LIST);
+  const state = urlState as TReportListState;
+  const setState = (next: TReportListState) => setUrlState(next);
+  const search = useSearchBox(state.q, (q) => setState({ ...state, q, page: 1 }));
   const reports = useReports(state);
   const page = reports.data;
   return (
-    <div className="flex flex-col gap-3">
+    <div className="flex flex-col gap-3" onClickCapture={search.onClickCapture}>
       <div className="flex flex-wrap items-end gap-2">
         <label className="flex flex-col gap-1 text-sm">
           Search
           <Input
-            value={state.q}
+            type="search"
+            value={search.text}
             placeholder="Title, customer or machine"
-            onChange={(e) => setState({ ...state, q: e.target.value, page: 1 })}
+            onChange={(e) => search.setText(e.target.value)}
           />
         </label>
+        {asCustomer || customers.length === 0 ? null : (
+          <label className="flex flex-col gap-1 text-sm">
+            Customer
+            <Select
+              value={state.customerId}
+              onChange={(e) => setState({ ...state, customerId: e.target.value, page: 1 })}
+            >
+              <option value="">All customers</option>
+              {customers.map((c) => (
+                <option key={c.id} value={c.id}>
+                  {c.name}
+                </option>
+              ))}
+            </Select>
+          </label>
+        )}
         {asCustomer ? null : (
           <label className="flex flex-col gap-1 text-sm">
             Status
@@ -55,7 +90,7 @@ export function ReportsTable({ asCustomer }: { asCustomer: boolean }) {
         <EmptyState title={asCustomer ? "No reports shared with you yet" : "No reports here"}>
           {asCustomer
             ? "Your dealer's reports appear here when they share one with you."
-            : state.q || state.status
+            : state.q || state.status || state.customerId
               ? "Nothing matches these filters."
               : "Open an estimate and choose “Prepare a quote report”."}
         </EmptyState>

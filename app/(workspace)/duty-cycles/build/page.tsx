@@ -1,9 +1,10 @@
+import { getDb } from "@/db/client";
 import { redirect } from "next/navigation";
 import { getActor } from "@/features/auth/server/get-actor";
 import { BuilderForm } from "@/features/duty-cycles/components/builder-form";
 import { can } from "@/lib/authz/policy";
 import { EmptyState } from "@/lib/ui/empty-state";
-import { customerChoices } from "../customer-choices";
+import { listCustomerChoices } from "@/features/customers";
 
 export const metadata = { title: "Build a duty cycle" };
 
@@ -16,7 +17,7 @@ export default async function BuildDutyCyclePage({
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   if (!can(actor, "duty-cycle:write")) redirect("/duty-cycles");
-  const customers = await customerChoices(actor);
+  const customers = await listCustomerChoices({ db: getDb(), actor });
   return (
     <div className="flex flex-col gap-4">
       <div>

@@ -1,3 +1,4 @@
+import { getDb } from "@/db/client";
 import { redirect } from "next/navigation";
 import { getActor } from "@/features/auth/server/get-actor";
 import { UploadWizard } from "@/features/duty-cycles/components/upload-wizard";
@@ -5,7 +6,7 @@ import { MappingTemplatesPanel } from "@/features/duty-cycles/components/mapping
 import { can } from "@/lib/authz/policy";
 import { getEnv } from "@/lib/env";
 import { EmptyState } from "@/lib/ui/empty-state";
-import { customerChoices } from "../customer-choices";
+import { listCustomerChoices } from "@/features/customers";
 
 export const metadata = { title: "Upload a duty cycle" };
 
@@ -13,7 +14,7 @@ export default async function UploadDutyCyclePage() {
   const actor = await getActor();
   if (!actor) redirect("/sign-in");
   if (!can(actor, "duty-cycle:write")) redirect("/duty-cycles");
-  const customers = await customerChoices(actor);
+  const customers = await listCustomerChoices({ db: getDb(), actor });
   return (
     <div className="flex flex-col gap-4">
       <h1 className="text-2xl font-bold text-ink-900">Upload a duty cycle</h1>

@@ -6,7 +6,7 @@ import { ZBuilderInput } from "@/features/duty-cycles/schemas/builder";
 import { DutyCycleError } from "@/features/duty-cycles/server/errors";
 import { getDutyCycle } from "@/features/duty-cycles/server/get-duty-cycle";
 import { can } from "@/lib/authz/policy";
-import { customerChoices } from "../../customer-choices";
+import { listCustomerChoices } from "@/features/customers";
 
 export const metadata = { title: "Edit a built duty cycle" };
 
@@ -32,7 +32,7 @@ export default async function EditBuiltDutyCyclePage({
   }
   const builder = ZBuilderInput.safeParse(cycle.builderInput);
   if (cycle.source !== "builder" || !builder.success) redirect(`/duty-cycles/${id}`);
-  const customers = await customerChoices(actor);
+  const customers = await listCustomerChoices({ db: getDb(), actor });
   return (
     <div className="flex flex-col gap-4">
       <div>
