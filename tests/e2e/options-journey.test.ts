@@ -88,6 +88,17 @@ describe("options journey", () => {
       .getByText(/version 2/)
       .first()
       .waitFor();
+    // Both versions are listed; the first is a link back to what it said.
+    const versions = page.getByRole("navigation", { name: "Versions" });
+    await versions.getByText(/^2 \(this one/).waitFor();
+    await versions.getByRole("link", { name: /^1 / }).click();
+    await page.waitForURL(comparisonUrl);
+    await page
+      .getByText(/version 1/)
+      .first()
+      .waitFor();
+    await page.goBack();
+    await versions.getByText(/^2 \(this one/).waitFor();
 
     // 4. Sweep the front track from the comparison.
     await page.getByRole("link", { name: "Sweep a setting" }).click();

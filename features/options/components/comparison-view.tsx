@@ -25,6 +25,7 @@ import {
 import type { TComparisonDto } from "@/features/options/schemas/study";
 import { describeChange } from "@/features/options/lib/setup-choices";
 import { GroupedBarChart, PaybackChart } from "@/features/options/components/option-charts";
+import { StudyVersions } from "@/features/options/components/study-versions";
 
 /** Hours in words; a payback beyond any tyre's working life reads as such, not as 5,253,139 h. */
 const hoursText = (h: number | null) =>
@@ -139,6 +140,7 @@ function ComparisonBody({
             · version {c.version} · totalled over {formatNumber(c.hours, 0)} h · run{" "}
             {formatDate(c.createdAt)} · engine {c.engineVersion}
           </p>
+          <StudyVersions kind="comparison" seriesId={c.seriesId} currentId={c.id} />
         </div>
         <div className="flex flex-wrap gap-2">
           {canRun && c.estimateId ? (

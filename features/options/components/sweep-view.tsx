@@ -16,6 +16,7 @@ import {
   parameterUnit,
 } from "@/features/options/lib/setup-choices";
 import { SweepChart } from "@/features/options/components/option-charts";
+import { StudyVersions } from "@/features/options/components/study-versions";
 
 /** A stored sweep: cost per hour against one setting, today's and the best usable value. */
 export function SweepView({
@@ -94,6 +95,7 @@ function SweepBody({
             ) : null}{" "}
             · version {s.version} · run {formatDate(s.createdAt)} · engine {s.engineVersion}
           </p>
+          <StudyVersions kind="sweep" seriesId={s.seriesId} currentId={s.id} />
         </div>
         {canRun ? (
           <Button variant="secondary" size="sm" busy={rerun.isPending} onClick={onRerun}>

@@ -23,13 +23,15 @@ export const ZSweepCreate = z.object({
 });
 export type TSweepCreate = z.input<typeof ZSweepCreate>;
 
-/** List query: paging and the machine / customer a list is narrowed to. */
+/** List query: paging and the machine, customer, estimate or series a list is narrowed to. */
 export const ZStudyListQuery = z.object({
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(25),
   machineId: z.uuid().optional(),
   customerId: z.uuid().optional(),
   estimateId: z.uuid().optional(),
+  /** Every version of one study: the id of its series (its first version). */
+  seriesId: z.uuid().optional(),
   /** Text the title contains (the list's search box). */
   q: z
     .string()

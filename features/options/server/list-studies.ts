@@ -14,7 +14,7 @@ import { likePattern, notFound, parseOrThrow, toPage } from "@/features/platform
 import { toStudyRow } from "./study-dto";
 
 /**
- * Newest first, narrowed to a machine, customer or estimate and by title text; a customer sees
+ * Newest first, narrowed to a machine, customer, estimate or series and by title text; a customer sees
  * only their own.
  */
 export async function listStudies({
@@ -38,6 +38,7 @@ export async function listStudies({
     q.machineId ? eq(optionStudies.machineId, q.machineId) : undefined,
     q.customerId ? eq(optionStudies.customerId, q.customerId) : undefined,
     q.estimateId ? eq(optionStudies.estimateId, q.estimateId) : undefined,
+    q.seriesId ? eq(optionStudies.seriesId, q.seriesId) : undefined,
     q.q ? ilike(optionStudies.title, likePattern(q.q)) : undefined,
   ];
   const where = and(...filters);

@@ -2,6 +2,7 @@
 
 import Link from "next/link";
 import { Button } from "@/lib/ui/button";
+import { Field } from "@/lib/ui/field";
 import { Input, Select } from "@/lib/ui/input";
 import { EmptyState } from "@/lib/ui/empty-state";
 import { useSearchBox } from "@/lib/ui/use-search-box";
@@ -39,18 +40,16 @@ export function ReportsTable({
   return (
     <div className="flex flex-col gap-3" onClickCapture={search.onClickCapture}>
       <div className="flex flex-wrap items-end gap-2">
-        <label className="flex flex-col gap-1 text-sm">
-          Search
+        <Field label="Search">
           <Input
             type="search"
             value={search.text}
             placeholder="Title, customer or machine"
             onChange={(e) => search.setText(e.target.value)}
           />
-        </label>
+        </Field>
         {asCustomer || customers.length === 0 ? null : (
-          <label className="flex flex-col gap-1 text-sm">
-            Customer
+          <Field label="Customer">
             <Select
               value={state.customerId}
               onChange={(e) => setState({ ...state, customerId: e.target.value, page: 1 })}
@@ -62,11 +61,10 @@ export function ReportsTable({
                 </option>
               ))}
             </Select>
-          </label>
+          </Field>
         )}
         {asCustomer ? null : (
-          <label className="flex flex-col gap-1 text-sm">
-            Status
+          <Field label="Status">
             <Select
               value={state.status}
               onChange={(e) => setState({ ...state, status: e.target.value, page: 1 })}
@@ -78,7 +76,7 @@ export function ReportsTable({
                 </option>
               ))}
             </Select>
-          </label>
+          </Field>
         )}
       </div>
       {reports.isError ? (

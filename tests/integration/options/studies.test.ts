@@ -111,6 +111,32 @@ describe("comparisons API", () => {
     );
     expect(listed.body).toMatchObject({ total: 2, pageSize: 1, pageCount: 2 });
     expect(listed.body.items).toHaveLength(1);
+
+    // The comparison page lists every version of its series, newest first; another series on
+    // the same estimate stays out.
+    const other = await call(createComparison, team.estimator.cookie, "/api/v1/comparisons", {
+      method: "POST",
+      body: { estimateId, options: options.slice(1), hours: 1500 },
+    });
+    expect(other.status).toBe(201);
+    const series = await call(
+      listComparisons,
+      team.admin.cookie,
+      `/api/v1/comparisons?seriesId=${res.body.id}`,
+    );
+    expect(series.status).toBe(200);
+    expect(
+      series.body.items.map((r: { id: string; version: number }) => [r.id, r.version]),
+    ).toEqual([
+      [again.body.id, 2],
+      [res.body.id, 1],
+    ]);
+    const badSeries = await call(
+      listComparisons,
+      team.admin.cookie,
+      "/api/v1/comparisons?seriesId=7",
+    );
+    expect(badSeries.status).toBe(400);
   });
 
   it("rejects bad options with a field error and stores nothing", async () => {
