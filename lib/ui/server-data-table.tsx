@@ -14,6 +14,7 @@ import type { TListState } from "@/lib/query/list-state";
 import { useSearchBox } from "@/lib/ui/use-search-box";
 import { Button } from "@/lib/ui/button";
 import { DataTableShell } from "@/lib/ui/data-table-shell";
+import { PageButtons } from "@/lib/ui/pager";
 import { Input, Select } from "@/lib/ui/input";
 
 type TQueryLike<T> = {
@@ -256,25 +257,15 @@ export function ServerDataTable<T>({
                     ))}
                   </Select>
                 </label>
-                <Button
-                  variant="secondary"
-                  size="sm"
-                  disabled={state.page <= 1}
-                  onClick={() => onStateChange({ ...state, page: state.page - 1 })}
+                <PageButtons
+                  page={state.page}
+                  pageCount={page.pageCount}
+                  onPage={(n) => onStateChange({ ...state, page: n })}
                 >
-                  Previous
-                </Button>
-                <span>
-                  Page {page.page} of {page.pageCount}
-                </span>
-                <Button
-                  variant="secondary"
-                  size="sm"
-                  disabled={state.page >= page.pageCount}
-                  onClick={() => onStateChange({ ...state, page: state.page + 1 })}
-                >
-                  Next
-                </Button>
+                  <span>
+                    Page {page.page} of {page.pageCount}
+                  </span>
+                </PageButtons>
               </div>
             </>
           ) : null

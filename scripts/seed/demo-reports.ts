@@ -4,13 +4,13 @@
 // report is left alone.
 import { and, eq } from "drizzle-orm";
 import type { Db } from "@/db/client";
-import { machines, optionStudies, reports, users, type TDealership } from "@/db/schema";
-import type { TActor } from "@/lib/authz/actor";
+import { machines, optionStudies, reports, type TDealership } from "@/db/schema";
 import { DEMO_MACHINES } from "@/lib/demo/machines";
 import { createReport } from "@/features/reports/server/create-report";
 import { updateReport } from "@/features/reports/server/update-report";
 import { issueReport } from "@/features/reports/server/issue-report";
 import { shareReport } from "@/features/reports/server/share-report";
+import { seedActor } from "@/scripts/seed/seed-actor";
 
 const MACHINE = DEMO_MACHINES.find((d) => d.id === "row-crop-tractor")!.machine.name;
 
@@ -18,18 +18,7 @@ export async function seedDemoReports(
   db: Db,
   { dealership, estimatorEmail }: { dealership: TDealership; estimatorEmail: string },
 ) {
-  const [estimator] = await db.select().from(users).where(eq(users.email, estimatorEmail));
-  if (!estimator) throw new Error(`seed the demo accounts first: ${estimatorEmail} is missing`);
-  const actor: TActor = {
-    userId: estimator.id,
-    email: estimator.email,
-    name: estimator.name,
-    dealershipId: dealership.id,
-    roles: ["estimator"],
-    customerId: null,
-    unitSystem: estimator.unitSystem,
-    currency: dealership.currency,
-  };
+  const actor = await seedActor(db, { email: estimatorEmail, role: "estimator", dealership });
   const [study] = await db
     .select({ id: optionStudies.id })
     .from(optionStudies)

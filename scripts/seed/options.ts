@@ -3,8 +3,7 @@
 // verb as the API. Idempotent: a machine that has a comparison already is left alone.
 import { and, desc, eq, inArray, isNotNull } from "drizzle-orm";
 import type { Db } from "@/db/client";
-import { estimates, machines, optionStudies, users, type TDealership } from "@/db/schema";
-import type { TActor } from "@/lib/authz/actor";
+import { estimates, machines, optionStudies, type TDealership } from "@/db/schema";
 import { DEMO_MACHINES } from "@/lib/demo/machines";
 import {
   parameterValue,
@@ -15,6 +14,7 @@ import {
   type TOptionSpec,
 } from "@/lib/scrub";
 import { createStudy } from "@/features/options/server/create-study";
+import { seedActor } from "@/scripts/seed/seed-actor";
 
 /** Same sizes with a deeper tread at a higher price on both axles, and what fitting four costs. */
 function deeperTread(m: TMachine): TOptionSpec {
@@ -100,18 +100,7 @@ export async function seedOptions(
   db: Db,
   { dealership, adminEmail }: { dealership: TDealership; adminEmail: string },
 ) {
-  const [admin] = await db.select().from(users).where(eq(users.email, adminEmail));
-  if (!admin) throw new Error(`seed the demo accounts first: ${adminEmail} is missing`);
-  const actor: TActor = {
-    userId: admin.id,
-    email: admin.email,
-    name: admin.name,
-    dealershipId: dealership.id,
-    roles: ["dealer_admin"],
-    customerId: null,
-    unitSystem: admin.unitSystem,
-    currency: dealership.currency,
-  };
+  const actor = await seedActor(db, { email: adminEmail, role: "dealer_admin", dealership });
   const byName = new Map(DEMO_MACHINES.map((d) => [d.machine.name, d.id]));
   const rows = await db
     .select({ id: machines.id, name: machines.name })

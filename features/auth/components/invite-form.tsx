@@ -8,6 +8,7 @@ import { ROLE_LABELS } from "@/lib/authz/policy";
 import type { TRole } from "@/lib/authz/actor";
 import { FormMessage } from "@/features/auth/components/auth-frame";
 import { inviteMemberAction } from "@/features/auth/server/actions/team-actions";
+import { ChoiceOptions } from "@/lib/ui/choice-options";
 
 const ROLE_HINTS: Record<TRole, string> = {
   dealer_admin: "Manages staff, invitations and settings.",
@@ -44,11 +45,7 @@ export function InviteForm({ customers }: { customers: { id: string; name: strin
             <option value="" disabled>
               Choose a customer…
             </option>
-            {customers.map((c) => (
-              <option key={c.id} value={c.id}>
-                {c.name}
-              </option>
-            ))}
+            <ChoiceOptions choices={customers} />
           </Select>
         </Field>
       ) : null}

@@ -15,6 +15,7 @@ import {
   POSITION_NAMES,
   type TUnitSystem,
 } from "@/features/calibration/components/format";
+import { ChoiceOptions } from "@/lib/ui/choice-options";
 
 const STATUS: Record<TPlanStatus, string> = {
   planned: "",
@@ -88,11 +89,7 @@ export function TyrePlanView({
                 className="min-w-48"
               >
                 <option value="">Whole dealership</option>
-                {customers.map((c) => (
-                  <option key={c.id} value={c.id}>
-                    {c.name}
-                  </option>
-                ))}
+                <ChoiceOptions choices={customers} />
               </Select>
             </label>
           ) : null}

@@ -7,7 +7,7 @@ import { useUrlState } from "@/lib/ui/use-url-state";
 import { DataTableShell } from "@/lib/ui/data-table-shell";
 import { EmptyState } from "@/lib/ui/empty-state";
 import { Input, Select } from "@/lib/ui/input";
-import { Button } from "@/lib/ui/button";
+import { PageButtons } from "@/lib/ui/pager";
 import {
   DEFAULT_DUTY_CYCLE_LIST,
   useDutyCycles,
@@ -193,22 +193,11 @@ export function DutyCyclesTable({ canWrite }: { canWrite: boolean }) {
                 {data.pageCount}
               </span>
               <span className="flex gap-2">
-                <Button
-                  size="sm"
-                  variant="secondary"
-                  disabled={state.page <= 1}
-                  onClick={() => setUrlState({ ...state, page: state.page - 1 })}
-                >
-                  Previous
-                </Button>
-                <Button
-                  size="sm"
-                  variant="secondary"
-                  disabled={state.page >= data.pageCount}
-                  onClick={() => setUrlState({ ...state, page: state.page + 1 })}
-                >
-                  Next
-                </Button>
+                <PageButtons
+                  page={state.page}
+                  pageCount={data.pageCount}
+                  onPage={(n) => setUrlState({ ...state, page: n })}
+                />
               </span>
             </>
           ) : null

@@ -2,6 +2,7 @@
 
 import { Field } from "@/lib/ui/field";
 import { Input, Select } from "@/lib/ui/input";
+import { ChoiceOptions } from "@/lib/ui/choice-options";
 
 /** The name of a new duty cycle, the customer it belongs to, and the server's refusal if any. */
 export function NameAndCustomer({
@@ -27,11 +28,7 @@ export function NameAndCustomer({
         </Field>
         <Field label="Customer">
           <Select value={customerId} onChange={(e) => onCustomer(e.target.value)}>
-            {customers.map((c) => (
-              <option key={c.id} value={c.id}>
-                {c.name}
-              </option>
-            ))}
+            <ChoiceOptions choices={customers} />
           </Select>
         </Field>
       </div>

@@ -12,6 +12,7 @@ import { useCustomerSites } from "@/features/customers/client";
 import { useDutyCycleChoices } from "@/features/estimates/api/duty-cycle-choices";
 import { listState } from "@/lib/query/list-state";
 import { ApiError } from "@/lib/query/api-fetch";
+import { ChoiceOptions } from "@/lib/ui/choice-options";
 
 /** Pick customer, machine, duty cycle and (optionally) site, then run the engine. */
 export function NewEstimateForm({
@@ -75,11 +76,7 @@ export function NewEstimateForm({
             setSiteId("");
           }}
         >
-          {customers.map((c) => (
-            <option key={c.id} value={c.id}>
-              {c.name}
-            </option>
-          ))}
+          <ChoiceOptions choices={customers} />
         </Select>
       </Field>
       <Field

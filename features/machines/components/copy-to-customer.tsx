@@ -6,6 +6,7 @@ import { Button } from "@/lib/ui/button";
 import { Select } from "@/lib/ui/input";
 import { toast } from "@/lib/ui/toast";
 import { useCopyMachine } from "@/features/machines/api/machines";
+import { ChoiceOptions } from "@/lib/ui/choice-options";
 
 /** Copies a template to a chosen customer and opens the copy. */
 export function CopyToCustomer({
@@ -29,11 +30,7 @@ export function CopyToCustomer({
           onChange={(e) => setCustomerId(e.target.value)}
           className="h-9 w-56"
         >
-          {customers.map((c) => (
-            <option key={c.id} value={c.id}>
-              {c.name}
-            </option>
-          ))}
+          <ChoiceOptions choices={customers} />
         </Select>
       </label>
       <Button

@@ -1,7 +1,8 @@
 "use client";
 
 import Link from "next/link";
-import { Button } from "@/lib/ui/button";
+import { PageButtons } from "@/lib/ui/pager";
+import { ChoiceOptions } from "@/lib/ui/choice-options";
 import { Field } from "@/lib/ui/field";
 import { Input, Select } from "@/lib/ui/input";
 import { EmptyState } from "@/lib/ui/empty-state";
@@ -55,11 +56,7 @@ export function ReportsTable({
               onChange={(e) => setState({ ...state, customerId: e.target.value, page: 1 })}
             >
               <option value="">All customers</option>
-              {customers.map((c) => (
-                <option key={c.id} value={c.id}>
-                  {c.name}
-                </option>
-              ))}
+              <ChoiceOptions choices={customers} />
             </Select>
           </Field>
         )}
@@ -152,25 +149,15 @@ export function ReportsTable({
       ) : null}
       {page && page.pageCount > 1 ? (
         <nav aria-label="Pages" className="flex items-center gap-2 text-sm">
-          <Button
-            size="sm"
-            variant="secondary"
-            disabled={state.page <= 1}
-            onClick={() => setState({ ...state, page: state.page - 1 })}
+          <PageButtons
+            page={state.page}
+            pageCount={page.pageCount}
+            onPage={(n) => setState({ ...state, page: n })}
           >
-            Previous
-          </Button>
-          <span>
-            Page {page.page} of {page.pageCount} ({page.total} rows)
-          </span>
-          <Button
-            size="sm"
-            variant="secondary"
-            disabled={state.page >= page.pageCount}
-            onClick={() => setState({ ...state, page: state.page + 1 })}
-          >
-            Next
-          </Button>
+            <span>
+              Page {page.page} of {page.pageCount} ({page.total} rows)
+            </span>
+          </PageButtons>
         </nav>
       ) : null}
     </div>

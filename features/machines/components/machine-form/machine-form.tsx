@@ -28,6 +28,7 @@ import {
   toRecordInput,
   type TMachineFormValues,
 } from "@/features/machines/components/machine-form/form-values";
+import { ChoiceOptions } from "@/lib/ui/choice-options";
 
 type Props = {
   machine?: TMachineDto;
@@ -126,11 +127,7 @@ export function MachineForm({
                 >
                   <Select {...register("customerId")}>
                     <option value="">Dealership template</option>
-                    {customers.map((c) => (
-                      <option key={c.id} value={c.id}>
-                        {c.name}
-                      </option>
-                    ))}
+                    <ChoiceOptions choices={customers} />
                   </Select>
                 </Field>
               </div>
