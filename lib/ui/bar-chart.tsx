@@ -5,6 +5,7 @@ import { GridRows } from "@visx/grid";
 import { Group } from "@visx/group";
 import { scaleBand, scaleLinear } from "@visx/scale";
 import { Bar } from "@visx/shape";
+import { ChartDataTable, ChartFigure, ChartLegend } from "@/lib/ui/chart-frame";
 
 const W = 460;
 const H = 260;
@@ -43,95 +44,73 @@ export function BarChart<T extends { label: string }>({
     nice: true,
   });
   return (
-    <figure className="flex flex-col gap-2">
-      <figcaption className="text-sm font-medium text-ink-900">{title}</figcaption>
-      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={title} className="w-full max-w-[460px]">
-        <GridRows
-          scale={y}
-          left={M.left}
-          width={W - M.left - M.right}
-          className="stroke-ink-100"
-          numTicks={5}
-        />
-        <Group>
-          {data.map((d) => {
-            let base = 0;
-            return stacks.map((s) => {
-              const v = value(d, s.key);
-              const y0 = y(base);
-              base += v;
-              const y1 = y(base);
-              return (
-                <Bar
-                  key={`${d.label}-${s.key}`}
-                  x={x(d.label)}
-                  y={y1}
-                  width={x.bandwidth()}
-                  height={Math.max(0, y0 - y1)}
-                  className={s.className}
-                />
-              );
-            });
-          })}
-        </Group>
-        <AxisBottom
-          top={H - M.bottom}
-          scale={x}
-          // Long group names ("50 m and over") wrap onto a second line within their band.
-          tickLabelProps={{
-            fontSize: 10,
-            textAnchor: "middle",
-            verticalAnchor: "start",
-            width: x.step(),
-          }}
-        />
-        <AxisLeft
-          left={M.left}
-          scale={y}
-          numTicks={5}
-          label={yLabel}
-          tickLabelProps={{ fontSize: 10, textAnchor: "end", dx: -4, dy: 3 }}
-          labelProps={{ fontSize: 11, textAnchor: "middle" }}
-        />
-      </svg>
-      {stacks.length > 1 ? (
-        <div className="flex flex-wrap gap-4 text-xs text-ink-700">
-          {stacks.map((s) => (
-            <span key={s.key} className="flex items-center gap-1">
-              <svg width="12" height="12" aria-hidden>
-                <rect width="12" height="12" className={s.className} />
-              </svg>
-              {s.label}
-            </span>
-          ))}
-        </div>
-      ) : null}
-      {/* A table ignores sr-only's 1 px width, so the wrapper carries it. */}
-      <div className="sr-only">
-        <table>
-          <caption>{title}</caption>
-          <thead>
-            <tr>
-              <th scope="col">Group</th>
-              {stacks.map((s) => (
-                <th key={s.key} scope="col">
-                  {s.label}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {data.map((d) => (
-              <tr key={d.label}>
-                <th scope="row">{d.label}</th>
-                {stacks.map((s) => (
-                  <td key={s.key}>{format(value(d, s.key))}</td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
-    </figure>
+    <ChartFigure
+      title={title}
+      width={W}
+      height={H}
+      maxWidth={460}
+      after={
+        <>
+          {stacks.length > 1 ? <ChartLegend items={stacks} /> : null}
+          <ChartDataTable
+            title={title}
+            corner="Group"
+            columns={stacks.map((s) => s.label)}
+            rows={data.map((d) => ({
+              label: d.label,
+              cells: stacks.map((s) => format(value(d, s.key))),
+            }))}
+          />
+        </>
+      }
+    >
+      <GridRows
+        scale={y}
+        left={M.left}
+        width={W - M.left - M.right}
+        className="stroke-ink-100"
+        numTicks={5}
+      />
+      <Group>
+        {data.map((d) => {
+          let base = 0;
+          return stacks.map((s) => {
+            const v = value(d, s.key);
+            const y0 = y(base);
+            base += v;
+            const y1 = y(base);
+            return (
+              <Bar
+                key={`${d.label}-${s.key}`}
+                x={x(d.label)}
+                y={y1}
+                width={x.bandwidth()}
+                height={Math.max(0, y0 - y1)}
+                className={s.className}
+              />
+            );
+          });
+        })}
+      </Group>
+      <AxisBottom
+        top={H - M.bottom}
+        scale={x}
+        // Long group names ("50 m and over") wrap onto a second line within their band.
+        tickLabelProps={{
+          fontSize: 10,
+          textAnchor: "middle",
+          verticalAnchor: "start",
+          width: x.step(),
+        }}
+      />
+      <AxisLeft
+        left={M.left}
+        scale={y}
+        numTicks={5}
+        label={yLabel}
+        tickLabelProps={{ fontSize: 10, textAnchor: "end", dx: -4, dy: 3 }}
+        labelProps={{ fontSize: 11, textAnchor: "middle" }}
+      />
+    </ChartFigure>
   );
 }

@@ -5,6 +5,7 @@ import { GridRows } from "@visx/grid";
 import { Group } from "@visx/group";
 import { scaleBand, scaleLinear } from "@visx/scale";
 import { Bar, Line, LinePath } from "@visx/shape";
+import { ChartDataTable, ChartFigure, ChartLegend } from "@/lib/ui/chart-frame";
 
 const W = 520;
 const H = 280;
@@ -28,59 +29,9 @@ export const SERIES_STROKE = [
 
 export type TSeries = { label: string };
 
-function Legend({ series }: { series: TSeries[] }) {
-  return (
-    <div className="flex flex-wrap gap-4 text-xs text-ink-700">
-      {series.map((s, i) => (
-        <span key={s.label} className="flex items-center gap-1">
-          <svg width="12" height="12" aria-hidden>
-            <rect width="12" height="12" className={SERIES_FILL[i % SERIES_FILL.length]} />
-          </svg>
-          {s.label}
-        </span>
-      ))}
-    </div>
-  );
-}
-
-/** The figures behind a chart, for screen readers (a table ignores sr-only's width itself). */
-function HiddenTable({
-  title,
-  columns,
-  rows,
-}: {
-  title: string;
-  columns: string[];
-  rows: { label: string; cells: string[] }[];
-}) {
-  return (
-    <div className="sr-only">
-      <table>
-        <caption>{title}</caption>
-        <thead>
-          <tr>
-            <th scope="col">—</th>
-            {columns.map((c) => (
-              <th key={c} scope="col">
-                {c}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((r) => (
-            <tr key={r.label}>
-              <th scope="row">{r.label}</th>
-              {r.cells.map((c, i) => (
-                <td key={i}>{c}</td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
-  );
-}
+/** One legend entry per series, in the series colours. */
+const legendOf = (series: TSeries[]) =>
+  series.map((s, i) => ({ label: s.label, className: SERIES_FILL[i % SERIES_FILL.length]! }));
 
 /**
  * Bars grouped by category (wheel position), one bar per series (today's setup and each
@@ -115,58 +66,64 @@ export function GroupedBarChart({
     nice: true,
   });
   return (
-    <figure className="flex flex-col gap-2">
-      <figcaption className="text-sm font-medium text-ink-900">{title}</figcaption>
-      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={title} className="w-full max-w-[520px]">
-        <GridRows
-          scale={y}
-          left={M.left}
-          width={W - M.left - M.right}
-          className="stroke-ink-100"
-          numTicks={5}
-        />
-        {groups.map((g, gi) => (
-          <Group key={g} left={outer(g)}>
-            {series.map((s, si) => {
-              const v = value(gi, si);
-              const top = y(Number.isFinite(v) ? v : 0);
-              return (
-                <Bar
-                  key={s.label}
-                  x={inner(s.label)}
-                  y={top}
-                  width={inner.bandwidth()}
-                  height={Math.max(0, H - M.bottom - top)}
-                  className={SERIES_FILL[si % SERIES_FILL.length]}
-                />
-              );
-            })}
-          </Group>
-        ))}
-        <AxisBottom
-          top={H - M.bottom}
-          scale={outer}
-          tickLabelProps={{ fontSize: 10, textAnchor: "middle" }}
-        />
-        <AxisLeft
-          left={M.left}
-          scale={y}
-          numTicks={5}
-          label={yLabel}
-          tickLabelProps={{ fontSize: 10, textAnchor: "end", dx: -4, dy: 3 }}
-          labelProps={{ fontSize: 11, textAnchor: "middle" }}
-        />
-      </svg>
-      <Legend series={series} />
-      <HiddenTable
-        title={title}
-        columns={series.map((s) => s.label)}
-        rows={groups.map((g, gi) => ({
-          label: g,
-          cells: series.map((_s, si) => format(value(gi, si))),
-        }))}
+    <ChartFigure
+      title={title}
+      width={W}
+      height={H}
+      maxWidth={520}
+      after={
+        <>
+          <ChartLegend items={legendOf(series)} />
+          <ChartDataTable
+            title={title}
+            columns={series.map((s) => s.label)}
+            rows={groups.map((g, gi) => ({
+              label: g,
+              cells: series.map((_s, si) => format(value(gi, si))),
+            }))}
+          />
+        </>
+      }
+    >
+      <GridRows
+        scale={y}
+        left={M.left}
+        width={W - M.left - M.right}
+        className="stroke-ink-100"
+        numTicks={5}
       />
-    </figure>
+      {groups.map((g, gi) => (
+        <Group key={g} left={outer(g)}>
+          {series.map((s, si) => {
+            const v = value(gi, si);
+            const top = y(Number.isFinite(v) ? v : 0);
+            return (
+              <Bar
+                key={s.label}
+                x={inner(s.label)}
+                y={top}
+                width={inner.bandwidth()}
+                height={Math.max(0, H - M.bottom - top)}
+                className={SERIES_FILL[si % SERIES_FILL.length]}
+              />
+            );
+          })}
+        </Group>
+      ))}
+      <AxisBottom
+        top={H - M.bottom}
+        scale={outer}
+        tickLabelProps={{ fontSize: 10, textAnchor: "middle" }}
+      />
+      <AxisLeft
+        left={M.left}
+        scale={y}
+        numTicks={5}
+        label={yLabel}
+        tickLabelProps={{ fontSize: 10, textAnchor: "end", dx: -4, dy: 3 }}
+        labelProps={{ fontSize: 11, textAnchor: "middle" }}
+      />
+    </ChartFigure>
   );
 }
 
@@ -214,81 +171,87 @@ export function PaybackChart({
     nice: true,
   });
   return (
-    <figure className="flex flex-col gap-2">
-      <figcaption className="text-sm font-medium text-ink-900">{title}</figcaption>
-      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={title} className="w-full max-w-[520px]">
-        <GridRows
-          scale={y}
-          left={M.left}
-          width={W - M.left - M.right}
-          className="stroke-ink-100"
-          numTicks={5}
-        />
-        {lines.map((l, i) =>
-          Number.isFinite(l.perHour) ? (
-            <LinePath
-              key={l.label}
-              data={[0, hours]}
-              x={(h) => x(h)}
-              y={(h) => y(total(l, h))}
-              strokeWidth={i === 0 ? 2.5 : 2}
-              strokeDasharray={i === 0 ? "6 4" : undefined}
+    <ChartFigure
+      title={title}
+      width={W}
+      height={H}
+      maxWidth={520}
+      after={
+        <>
+          <ChartLegend items={legendOf(lines)} />
+          <p className="text-xs text-ink-600">
+            Dashed grey: today&apos;s setup. A dot marks where an option has paid for its change.
+          </p>
+          <ChartDataTable
+            title={title}
+            columns={["Cost at 0 h", `Cost at ${hours} h`, "Pays back after"]}
+            rows={lines.map((l) => ({
+              label: l.label,
+              cells: [
+                formatMoney(l.start),
+                formatMoney(total(l, hours)),
+                l.payback === null ? "—" : `${Math.round(l.payback)} h`,
+              ],
+            }))}
+          />
+        </>
+      }
+    >
+      <GridRows
+        scale={y}
+        left={M.left}
+        width={W - M.left - M.right}
+        className="stroke-ink-100"
+        numTicks={5}
+      />
+      {lines.map((l, i) =>
+        Number.isFinite(l.perHour) ? (
+          <LinePath
+            key={l.label}
+            data={[0, hours]}
+            x={(h) => x(h)}
+            y={(h) => y(total(l, h))}
+            strokeWidth={i === 0 ? 2.5 : 2}
+            strokeDasharray={i === 0 ? "6 4" : undefined}
+            className={SERIES_STROKE[i % SERIES_STROKE.length]}
+          />
+        ) : null,
+      )}
+      {lines.map((l, i) =>
+        l.payback !== null && l.payback > 0 && l.payback <= hours ? (
+          <g key={`pb-${l.label}`}>
+            <Line
+              from={{ x: x(l.payback), y: y(total(l, l.payback)) }}
+              to={{ x: x(l.payback), y: H - M.bottom }}
+              strokeDasharray="2 3"
               className={SERIES_STROKE[i % SERIES_STROKE.length]}
             />
-          ) : null,
-        )}
-        {lines.map((l, i) =>
-          l.payback !== null && l.payback > 0 && l.payback <= hours ? (
-            <g key={`pb-${l.label}`}>
-              <Line
-                from={{ x: x(l.payback), y: y(total(l, l.payback)) }}
-                to={{ x: x(l.payback), y: H - M.bottom }}
-                strokeDasharray="2 3"
-                className={SERIES_STROKE[i % SERIES_STROKE.length]}
-              />
-              <circle
-                cx={x(l.payback)}
-                cy={y(total(l, l.payback))}
-                r={4}
-                className={SERIES_FILL[i % SERIES_FILL.length]}
-              />
-            </g>
-          ) : null,
-        )}
-        <AxisBottom
-          top={H - M.bottom}
-          scale={x}
-          numTicks={5}
-          label="Operating hours (h)"
-          tickLabelProps={{ fontSize: 10, textAnchor: "middle" }}
-          labelProps={{ fontSize: 11, textAnchor: "middle" }}
-        />
-        <AxisLeft
-          left={M.left}
-          scale={y}
-          numTicks={5}
-          label={`Cost to date (${currencyLabel})`}
-          tickLabelProps={{ fontSize: 10, textAnchor: "end", dx: -4, dy: 3 }}
-          labelProps={{ fontSize: 11, textAnchor: "middle" }}
-        />
-      </svg>
-      <Legend series={lines} />
-      <p className="text-xs text-ink-600">
-        Dashed grey: today&apos;s setup. A dot marks where an option has paid for its change.
-      </p>
-      <HiddenTable
-        title={title}
-        columns={["Cost at 0 h", `Cost at ${hours} h`, "Pays back after"]}
-        rows={lines.map((l) => ({
-          label: l.label,
-          cells: [
-            formatMoney(l.start),
-            formatMoney(total(l, hours)),
-            l.payback === null ? "—" : `${Math.round(l.payback)} h`,
-          ],
-        }))}
+            <circle
+              cx={x(l.payback)}
+              cy={y(total(l, l.payback))}
+              r={4}
+              className={SERIES_FILL[i % SERIES_FILL.length]}
+            />
+          </g>
+        ) : null,
+      )}
+      <AxisBottom
+        top={H - M.bottom}
+        scale={x}
+        numTicks={5}
+        label="Operating hours (h)"
+        tickLabelProps={{ fontSize: 10, textAnchor: "middle" }}
+        labelProps={{ fontSize: 11, textAnchor: "middle" }}
       />
-    </figure>
+      <AxisLeft
+        left={M.left}
+        scale={y}
+        numTicks={5}
+        label={`Cost to date (${currencyLabel})`}
+        tickLabelProps={{ fontSize: 10, textAnchor: "end", dx: -4, dy: 3 }}
+        labelProps={{ fontSize: 11, textAnchor: "middle" }}
+      />
+    </ChartFigure>
   );
 }
 
@@ -336,113 +299,132 @@ export function SweepChart({
   });
   const drawn = points.filter((p) => p.y !== null && Number.isFinite(p.y));
   return (
-    <figure className="flex flex-col gap-2">
-      <figcaption className="text-sm font-medium text-ink-900">{title}</figcaption>
-      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={title} className="w-full max-w-[720px]">
-        <GridRows
-          scale={y}
-          left={M.left}
-          width={W - M.left - M.right}
-          className="stroke-ink-100"
-          numTicks={5}
-        />
-        <LinePath
-          data={drawn}
-          x={(p) => x(p.x)}
-          y={(p) => y(p.y ?? 0)}
-          strokeWidth={2}
-          className="stroke-furrow-600"
-        />
-        {points.map((p, i) =>
-          p.y === null || !Number.isFinite(p.y) ? (
-            // The engine could not apply this value: a cross on the axis.
-            <g key={i} className="stroke-danger-600" strokeWidth={2}>
-              <line x1={x(p.x) - 4} x2={x(p.x) + 4} y1={H - M.bottom - 8} y2={H - M.bottom} />
-              <line x1={x(p.x) - 4} x2={x(p.x) + 4} y1={H - M.bottom} y2={H - M.bottom - 8} />
-            </g>
-          ) : p.feasible ? (
-            <circle key={i} cx={x(p.x)} cy={y(p.y)} r={3} className="fill-furrow-600" />
-          ) : (
-            <circle
-              key={i}
-              cx={x(p.x)}
-              cy={y(p.y)}
-              r={4}
-              strokeWidth={2}
-              className="fill-white stroke-danger-600"
-            />
-          ),
-        )}
-        <Line
-          from={{ x: x(current.x), y: M.top }}
-          to={{ x: x(current.x), y: H - M.bottom }}
-          strokeDasharray="6 4"
-          strokeWidth={1.5}
-          className="stroke-ink-500"
-        />
-        {best ? (
-          <>
-            <Line
-              from={{ x: x(best.x), y: M.top }}
-              to={{ x: x(best.x), y: H - M.bottom }}
-              strokeWidth={1.5}
-              className="stroke-ok-700"
-            />
-            <circle cx={x(best.x)} cy={y(best.y)} r={6} className="fill-ok-700" />
-          </>
-        ) : null}
-        <AxisBottom
-          top={H - M.bottom}
-          scale={x}
-          numTicks={6}
-          label={xLabel}
-          tickFormat={(v) => formatX(Number(v))}
-          tickLabelProps={{ fontSize: 10, textAnchor: "middle" }}
-          labelProps={{ fontSize: 11, textAnchor: "middle" }}
-        />
-        <AxisLeft
-          left={M.left}
-          scale={y}
-          numTicks={5}
-          label={yLabel}
-          tickLabelProps={{ fontSize: 10, textAnchor: "end", dx: -4, dy: 3 }}
-          labelProps={{ fontSize: 11, textAnchor: "middle" }}
-        />
-      </svg>
-      <div className="flex flex-wrap gap-4 text-xs text-ink-700">
-        <span className="flex items-center gap-1">
-          <svg width="14" height="12" aria-hidden>
-            <line x1="7" x2="7" y1="0" y2="12" strokeDasharray="3 2" className="stroke-ink-500" />
-          </svg>
-          Today: {formatX(current.x)}
-          {unit && unit !== "°" ? ` ${unit}` : unit}
-        </span>
-        {best ? (
-          <span className="flex items-center gap-1">
-            <svg width="12" height="12" aria-hidden>
-              <circle cx="6" cy="6" r="5" className="fill-ok-700" />
-            </svg>
-            Best within limits: {formatX(best.x)}
-            {unit && unit !== "°" ? ` ${unit}` : unit}
-          </span>
-        ) : (
-          <span>No setting within limits</span>
-        )}
-        <span className="flex items-center gap-1">
-          <svg width="12" height="12" aria-hidden>
-            <circle cx="6" cy="6" r="4" strokeWidth="2" className="fill-white stroke-danger-600" />
-          </svg>
-          Not usable (outside limits, overloads a tyre or cannot make a turn)
-        </span>
-      </div>
-      <HiddenTable
-        title={title}
-        columns={[yLabel, "Usable"]}
-        rows={points.map((p) => ({
-          label: formatX(p.x),
-          cells: [p.y === null ? "—" : formatY(p.y), p.feasible ? "yes" : "no"],
-        }))}
+    <ChartFigure
+      title={title}
+      width={W}
+      height={H}
+      maxWidth={720}
+      after={
+        <>
+          <div className="flex flex-wrap gap-4 text-xs text-ink-700">
+            <span className="flex items-center gap-1">
+              <svg width="14" height="12" aria-hidden>
+                <line
+                  x1="7"
+                  x2="7"
+                  y1="0"
+                  y2="12"
+                  strokeDasharray="3 2"
+                  className="stroke-ink-500"
+                />
+              </svg>
+              Today: {formatX(current.x)}
+              {unit && unit !== "°" ? ` ${unit}` : unit}
+            </span>
+            {best ? (
+              <span className="flex items-center gap-1">
+                <svg width="12" height="12" aria-hidden>
+                  <circle cx="6" cy="6" r="5" className="fill-ok-700" />
+                </svg>
+                Best within limits: {formatX(best.x)}
+                {unit && unit !== "°" ? ` ${unit}` : unit}
+              </span>
+            ) : (
+              <span>No setting within limits</span>
+            )}
+            <span className="flex items-center gap-1">
+              <svg width="12" height="12" aria-hidden>
+                <circle
+                  cx="6"
+                  cy="6"
+                  r="4"
+                  strokeWidth="2"
+                  className="fill-white stroke-danger-600"
+                />
+              </svg>
+              Not usable (outside limits, overloads a tyre or cannot make a turn)
+            </span>
+          </div>
+          <ChartDataTable
+            title={title}
+            columns={[yLabel, "Usable"]}
+            rows={points.map((p) => ({
+              label: formatX(p.x),
+              cells: [p.y === null ? "—" : formatY(p.y), p.feasible ? "yes" : "no"],
+            }))}
+          />
+        </>
+      }
+    >
+      <GridRows
+        scale={y}
+        left={M.left}
+        width={W - M.left - M.right}
+        className="stroke-ink-100"
+        numTicks={5}
       />
-    </figure>
+      <LinePath
+        data={drawn}
+        x={(p) => x(p.x)}
+        y={(p) => y(p.y ?? 0)}
+        strokeWidth={2}
+        className="stroke-furrow-600"
+      />
+      {points.map((p, i) =>
+        p.y === null || !Number.isFinite(p.y) ? (
+          // The engine could not apply this value: a cross on the axis.
+          <g key={i} className="stroke-danger-600" strokeWidth={2}>
+            <line x1={x(p.x) - 4} x2={x(p.x) + 4} y1={H - M.bottom - 8} y2={H - M.bottom} />
+            <line x1={x(p.x) - 4} x2={x(p.x) + 4} y1={H - M.bottom} y2={H - M.bottom - 8} />
+          </g>
+        ) : p.feasible ? (
+          <circle key={i} cx={x(p.x)} cy={y(p.y)} r={3} className="fill-furrow-600" />
+        ) : (
+          <circle
+            key={i}
+            cx={x(p.x)}
+            cy={y(p.y)}
+            r={4}
+            strokeWidth={2}
+            className="fill-white stroke-danger-600"
+          />
+        ),
+      )}
+      <Line
+        from={{ x: x(current.x), y: M.top }}
+        to={{ x: x(current.x), y: H - M.bottom }}
+        strokeDasharray="6 4"
+        strokeWidth={1.5}
+        className="stroke-ink-500"
+      />
+      {best ? (
+        <>
+          <Line
+            from={{ x: x(best.x), y: M.top }}
+            to={{ x: x(best.x), y: H - M.bottom }}
+            strokeWidth={1.5}
+            className="stroke-ok-700"
+          />
+          <circle cx={x(best.x)} cy={y(best.y)} r={6} className="fill-ok-700" />
+        </>
+      ) : null}
+      <AxisBottom
+        top={H - M.bottom}
+        scale={x}
+        numTicks={6}
+        label={xLabel}
+        tickFormat={(v) => formatX(Number(v))}
+        tickLabelProps={{ fontSize: 10, textAnchor: "middle" }}
+        labelProps={{ fontSize: 11, textAnchor: "middle" }}
+      />
+      <AxisLeft
+        left={M.left}
+        scale={y}
+        numTicks={5}
+        label={yLabel}
+        tickLabelProps={{ fontSize: 10, textAnchor: "end", dx: -4, dy: 3 }}
+        labelProps={{ fontSize: 11, textAnchor: "middle" }}
+      />
+    </ChartFigure>
   );
 }
